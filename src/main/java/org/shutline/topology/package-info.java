@@ -1,0 +1,7 @@
+/**
+ * From a {@link org.shutline.model.Network} to a frozen {@link org.shutline.topology.Graph}:
+ * snapping of main ends, tees, valve splits, station links, attachment of point
+ * features and services, and the connectivity findings for GIS staff.
+ * No Swing or AWT.
+ */
+package org.shutline.topology;
