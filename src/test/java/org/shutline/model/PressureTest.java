@@ -12,7 +12,7 @@ class PressureTest {
     void psiIsNistFactor() {
         // NIST SP 811 B.8: pound-force per square inch (psi) = 6.894 757 E+03 Pa
         assertThat(PressureUnit.PSI.pascals()).isCloseTo(6.894757e3, within(0.001));
-        assertThat(Pressure.psi(1).pascals).isCloseTo(6894.757, within(0.001));
+        assertThat(Pressure.psi(1).pascals()).isCloseTo(6894.757, within(0.001));
     }
 
     @Test
