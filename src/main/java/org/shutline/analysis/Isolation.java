@@ -1,0 +1,394 @@
+package org.shutline.analysis;
+
+import java.time.LocalDate;
+import java.time.Period;
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import org.locationtech.jts.geom.Point;
+import org.shutline.model.Network;
+import org.shutline.model.Operability;
+import org.shutline.model.Service;
+import org.shutline.model.Station;
+import org.shutline.model.Valve;
+import org.shutline.model.ValveKind;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.SegmentGraph;
+import org.shutline.trace.ValveSegments;
+
+/**
+ * Valve isolation of a zone (work zone or incident point) in one network state, by the
+ * isolation rules of the design:
+ * <ol>
+ * <li>The zone's segments ({@link Zone}) are grown across open valves with
+ *     {@code operable = no}: the <em>region</em>. Valves already closed bound it and are
+ *     not listed.</li>
+ * <li>A source in the region, or an in-service station whose outlet is in the region and
+ *     whose inlet segment is fed, means valves alone cannot isolate it:
+ *     {@code isolable = false} with the reason; such stations are named with their
+ *     inlet-side valves (kind {@code station}, on the station's inlet system, within the
+ *     point tolerance of the station). The outcome is then computed as if those stations
+ *     were stopped and those sources shut.</li>
+ * <li>After: gas flows from the sources over the segment graph never entering the
+ *     region. An open valve on the region's boundary is listed only if its far side is
+ *     still fed after; the others lead to segments that lose every source
+ *     (<em>unintended isolation</em>), which go off gas too.</li>
+ * <li>Services off = services fed before and not fed after; meters likewise; critical
+ *     customers are those with {@link Service#isCritical()}.</li>
+ * <li>Listed valves are ordered from the feeding side: by the hop distance of their far
+ *     side from the sources in the segment graph before closing (upstream feeds first),
+ *     then by valve id.</li>
+ * <li>Each listed valve that is {@code unknown} or past its inspection interval (15
+ *     months by default, 49 CFR 192.747; a valve never checked, {@code checked} null,
+ *     counts as overdue unless {@link Options#neverCheckedIsOverdue()} is false) gets a
+ *     fallback: the region grown across it (and on across inoperable valves) is isolated
+ *     again; the fallback lists that full valve set, the valves to close in addition, and
+ *     the services this adds.</li>
+ * <li>An alternative: the region grown across one listed valve's far segment, when that
+ *     needs fewer valves; the one with fewest valves, then fewest services off, is
+ *     reported with the services it adds.</li>
+ * </ol>
+ * Cost: each isolation is O(segments + links) on the segment graph, plus the zone
+ * lookup (see {@link ZoneSegments}); fallbacks and the alternative repeat it once per
+ * listed valve.
+ */
+public final class Isolation {
+    /** Inspection interval of 49 CFR 192.747: at most 15 months. */
+    public static final Period DEFAULT_INSPECTION_INTERVAL = Period.ofMonths(15);
+
+    /** Settings: the date checks are measured against, the interval, and how never-checked valves count. */
+    public record Options(LocalDate asOf, Period inspectionInterval, boolean neverCheckedIsOverdue) {
+        public Options {
+            Objects.requireNonNull(asOf, "asOf");
+            Objects.requireNonNull(inspectionInterval, "inspectionInterval");
+        }
+
+        public static Options asOf(LocalDate date) {
+            return new Options(date, DEFAULT_INSPECTION_INTERVAL, true);
+        }
+    }
+
+    /** One valve to close, in operating order (1 = first). */
+    public record ValveStep(int order, String valveId, int valve, Operability operable, boolean overdue, int hops) {}
+
+    /** What to do if valve {@code valveId} fails to close. */
+    public record Fallback(String valveId, String why, boolean isolable, List<String> valves, List<String> thenClose,
+                           List<String> addedServices, long addedMeters) {
+        public Fallback {
+            valves = List.copyOf(valves);
+            thenClose = List.copyOf(thenClose);
+            addedServices = List.copyOf(addedServices);
+        }
+    }
+
+    /** A smaller valve set at the cost of more services off. */
+    public record Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
+        public Alternative {
+            valves = List.copyOf(valves);
+            addedServices = List.copyOf(addedServices);
+        }
+    }
+
+    /** The outcome of one isolation. Segment and service sets are indices of the segments and state used. */
+    public record Result(boolean isolable, String reason, BitSet zoneSegments, BitSet region, BitSet unintended,
+                         List<ValveStep> valves, List<String> closedBoundaryValves, List<String> unlistedValves,
+                         List<String> sourcesInRegion, List<String> stationsToStop, List<String> stationInletValves,
+                         BitSet servicesOff, List<String> serviceIdsOff, long metersOff, List<String> criticalOff,
+                         List<Fallback> fallbacks, Optional<Alternative> alternative) {
+        public Result {
+            zoneSegments = (BitSet) zoneSegments.clone();
+            region = (BitSet) region.clone();
+            unintended = (BitSet) unintended.clone();
+            valves = List.copyOf(valves);
+            closedBoundaryValves = List.copyOf(closedBoundaryValves);
+            unlistedValves = List.copyOf(unlistedValves);
+            sourcesInRegion = List.copyOf(sourcesInRegion);
+            stationsToStop = List.copyOf(stationsToStop);
+            stationInletValves = List.copyOf(stationInletValves);
+            servicesOff = (BitSet) servicesOff.clone();
+            serviceIdsOff = List.copyOf(serviceIdsOff);
+            criticalOff = List.copyOf(criticalOff);
+            fallbacks = List.copyOf(fallbacks);
+        }
+
+        @Override public BitSet zoneSegments() { return (BitSet) zoneSegments.clone(); }
+        @Override public BitSet region() { return (BitSet) region.clone(); }
+        @Override public BitSet unintended() { return (BitSet) unintended.clone(); }
+        @Override public BitSet servicesOff() { return (BitSet) servicesOff.clone(); }
+
+        /** Listed valve ids in operating order. */
+        public List<String> valveIds() {
+            List<String> ids = new ArrayList<>(valves.size());
+            for (ValveStep v : valves) ids.add(v.valveId());
+            return ids;
+        }
+    }
+
+    private final ValveSegments segs;
+    private final SegmentGraph sg;
+    private final NetworkState state;
+    private final Options options;
+    private final BitSet before;
+    private final int[] hops;
+
+    public Isolation(ValveSegments segments, Options options) {
+        this.segs = segments;
+        this.sg = segments.graph();
+        this.state = segments.state();
+        this.options = options;
+        this.before = sg.reachFromSources(null, null);
+        this.hops = hopsFromSources();
+    }
+
+    /** Segments fed in the state before any closing. */
+    public BitSet fedSegments() {
+        return (BitSet) before.clone();
+    }
+
+    public Result isolate(Zone zone) {
+        BitSet zoneSegs = ZoneSegments.of(zone, segs);
+        Core core = core(zoneSegs);
+        List<Fallback> fallbacks = new ArrayList<>();
+        Alternative alt = null;
+        for (int i = 0; i < core.listed.size(); i++) {
+            int l = core.listed.get(i);
+            int v = sg.linkFeature(l);
+            Core grown = core(with(core.region, core.far.get(i)));
+            String why = whyFallback(v);
+            if (why != null) fallbacks.add(fallback(v, why, core, grown));
+            boolean noWorse = grown.sources.size() <= core.sources.size()
+                    && grown.stations.size() <= core.stations.size();
+            if (noWorse && grown.listed.size() < core.listed.size()
+                    && (alt == null || grown.listed.size() < alt.valves().size()
+                        || (grown.listed.size() == alt.valves().size()
+                            && added(core, grown).size() < alt.addedServices().size()))) {
+                alt = new Alternative(ordered(grown), ids(added(core, grown)), meters(added(core, grown)));
+            }
+        }
+        return result(zoneSegs, core, fallbacks, alt);
+    }
+
+    private static BitSet with(BitSet b, int seg) {
+        BitSet c = (BitSet) b.clone();
+        c.set(seg);
+        return c;
+    }
+
+    /** The isolation of a seed set of segments, without fallbacks. */
+    private final class Core {
+        BitSet region;
+        BitSet after;
+        BitSet off;
+        BitSet offServices;
+        final List<Integer> listed = new ArrayList<>();
+        final List<Integer> far = new ArrayList<>();
+        final List<String> closedBounds = new ArrayList<>();
+        final List<String> unlisted = new ArrayList<>();
+        final List<String> sources = new ArrayList<>();
+        final List<Integer> stations = new ArrayList<>();
+    }
+
+    private Core core(BitSet seed) {
+        Core c = new Core();
+        c.region = grow(seed);
+        for (int i = 0; i < sg.sourceCount(); i++) {
+            int seg = sg.sourceSegment(i);
+            if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
+        }
+        BitSet stopLinks = new BitSet(sg.linkCount());
+        for (int st = 0; st < state.stationCount(); st++) {
+            int l = sg.stationLink(st);
+            if (l < 0 || !sg.isOpen(l)) continue;
+            if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
+                c.stations.add(st);
+                stopLinks.set(l);
+            }
+        }
+        c.after = sg.reachFromSources(c.region, stopLinks);
+        for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
+            for (int i = sg.adjStart(seg); i < sg.adjEnd(seg); i++) {
+                int l = sg.adjLink(i);
+                if (!sg.isValve(l)) continue;
+                int o = sg.other(l, seg);
+                if (c.region.get(o)) continue;
+                String id = state.valveId(sg.linkFeature(l));
+                if (!sg.isOpen(l)) c.closedBounds.add(id);
+                else if (c.after.get(o)) {
+                    c.listed.add(l);
+                    c.far.add(o);
+                } else c.unlisted.add(id);
+            }
+        }
+        c.off = (BitSet) before.clone();
+        c.off.andNot(c.after);
+        c.offServices = new BitSet(state.serviceCount());
+        for (int seg = c.off.nextSetBit(0); seg >= 0; seg = c.off.nextSetBit(seg + 1)) {
+            for (int sv : segs.services(seg)) c.offServices.set(sv);
+        }
+        return c;
+    }
+
+    /** The seed grown across open valves with operable = no; O(segments + links). */
+    BitSet grow(BitSet seed) {
+        BitSet region = (BitSet) seed.clone();
+        int[] stack = new int[Math.max(1, sg.segmentCount())];
+        int top = 0;
+        for (int s = seed.nextSetBit(0); s >= 0; s = seed.nextSetBit(s + 1)) stack[top++] = s;
+        while (top > 0) {
+            int u = stack[--top];
+            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
+                int l = sg.adjLink(i);
+                if (!sg.isOpenInoperable(l)) continue;
+                int w = sg.other(l, u);
+                if (!region.get(w)) {
+                    region.set(w);
+                    stack[top++] = w;
+                }
+            }
+        }
+        return region;
+    }
+
+    private int[] hopsFromSources() {
+        int n = sg.segmentCount();
+        int[] d = new int[n];
+        java.util.Arrays.fill(d, Integer.MAX_VALUE);
+        int[] queue = new int[Math.max(1, n)];
+        int head = 0, tail = 0;
+        for (int i = 0; i < sg.sourceCount(); i++) {
+            int s = sg.sourceSegment(i);
+            if (s >= 0 && d[s] != 0) {
+                d[s] = 0;
+                queue[tail++] = s;
+            }
+        }
+        while (head < tail) {
+            int u = queue[head++];
+            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
+                int l = sg.adjLink(i);
+                if (!sg.canFlow(l, u)) continue;
+                int w = sg.other(l, u);
+                if (d[w] == Integer.MAX_VALUE) {
+                    d[w] = d[u] + 1;
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return d;
+    }
+
+    /** Null when the valve is relied on without doubt; else why it needs a fallback. */
+    private String whyFallback(int v) {
+        if (state.valveOperability(v) == Operability.UNKNOWN) return "operability unknown";
+        LocalDate checked = state.valveChecked(v);
+        if (checked == null) return options.neverCheckedIsOverdue() ? "never checked" : null;
+        LocalDate due = checked.plus(options.inspectionInterval());
+        return due.isBefore(options.asOf()) ? "inspection overdue (last checked " + checked + ")" : null;
+    }
+
+    private boolean overdue(int v) {
+        String w = whyFallback(v);
+        return w != null && !w.equals("operability unknown");
+    }
+
+    private Fallback fallback(int v, String why, Core core, Core grown) {
+        List<String> all = ordered(grown);
+        List<String> before = new ArrayList<>();
+        for (int l : core.listed) before.add(state.valveId(sg.linkFeature(l)));
+        List<String> then = new ArrayList<>();
+        for (String id : all) if (!before.contains(id)) then.add(id);
+        BitSet add = added(core, grown);
+        boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
+        return new Fallback(state.valveId(v), why, isolable, all, then, ids(add), meters(add));
+    }
+
+    private static BitSet added(Core core, Core grown) {
+        BitSet add = (BitSet) grown.offServices.clone();
+        add.andNot(core.offServices);
+        return add;
+    }
+
+    private List<ValveStep> steps(Core c) {
+        List<ValveStep> out = new ArrayList<>();
+        List<int[]> order = new ArrayList<>();
+        for (int i = 0; i < c.listed.size(); i++) order.add(new int[] {c.listed.get(i), hops[c.far.get(i)]});
+        order.sort(Comparator.<int[]>comparingInt(a -> a[1]).thenComparing(a -> state.valveId(sg.linkFeature(a[0]))));
+        int n = 1;
+        for (int[] a : order) {
+            int v = sg.linkFeature(a[0]);
+            out.add(new ValveStep(n++, state.valveId(v), v, state.valveOperability(v), overdue(v), a[1]));
+        }
+        return out;
+    }
+
+    private List<String> ordered(Core c) {
+        List<String> ids = new ArrayList<>();
+        for (ValveStep s : steps(c)) ids.add(s.valveId());
+        return ids;
+    }
+
+    private List<String> ids(BitSet services) {
+        List<String> out = new ArrayList<>();
+        List<Service> all = state.network().services();
+        for (int i = services.nextSetBit(0); i >= 0; i = services.nextSetBit(i + 1)) out.add(all.get(i).id());
+        return out;
+    }
+
+    private long meters(BitSet services) {
+        long m = 0;
+        List<Service> all = state.network().services();
+        for (int i = services.nextSetBit(0); i >= 0; i = services.nextSetBit(i + 1)) m += all.get(i).meters();
+        return m;
+    }
+
+    private Result result(BitSet zoneSegs, Core c, List<Fallback> fallbacks, Alternative alt) {
+        List<String> stationIds = new ArrayList<>();
+        List<String> inletValves = new ArrayList<>();
+        for (int st : c.stations) {
+            stationIds.add(state.stationId(st));
+            inletValves.addAll(inletValves(st));
+        }
+        StringBuilder reason = new StringBuilder();
+        if (zoneSegs.isEmpty()) reason.append("the zone touches no active pipe");
+        if (!c.sources.isEmpty()) {
+            reason.append(reason.length() > 0 ? "; " : "")
+                    .append("source ").append(String.join(", ", c.sources))
+                    .append(" feeds the region directly: shut the supply, valves alone cannot isolate it");
+        }
+        if (!c.stations.isEmpty()) {
+            reason.append(reason.length() > 0 ? "; " : "")
+                    .append("station ").append(String.join(", ", stationIds))
+                    .append(" feeds the region directly: stop it")
+                    .append(inletValves.isEmpty() ? "" : " (inlet valves " + String.join(", ", inletValves) + ")")
+                    .append(", valves alone cannot isolate it");
+        }
+        BitSet unintended = (BitSet) c.off.clone();
+        unintended.andNot(c.region);
+        List<String> critical = new ArrayList<>();
+        List<Service> all = state.network().services();
+        for (int i = c.offServices.nextSetBit(0); i >= 0; i = c.offServices.nextSetBit(i + 1)) {
+            if (all.get(i).isCritical()) critical.add(all.get(i).id());
+        }
+        boolean isolable = reason.length() == 0;
+        return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), c.closedBounds,
+                c.unlisted, c.sources, stationIds, inletValves, c.offServices, ids(c.offServices),
+                meters(c.offServices), critical, fallbacks, Optional.ofNullable(alt));
+    }
+
+    /** Valves of kind station on the station's inlet system within the point tolerance of it. */
+    private List<String> inletValves(int st) {
+        Network net = state.network();
+        Station station = net.stations().get(st);
+        double tol = state.topology().tolerances().pointM();
+        List<String> out = new ArrayList<>();
+        Point at = station.geometry();
+        for (Valve v : net.valves()) {
+            if (v.kind() != ValveKind.STATION || !Objects.equals(v.systemId(), station.inSys())) continue;
+            if (at != null && v.geometry() != null && v.geometry().distance(at) <= tol) out.add(v.id());
+        }
+        return out;
+    }
+}

@@ -1,0 +1,104 @@
+package org.shutline.trace;
+
+import java.util.BitSet;
+import org.shutline.model.MainStatus;
+import org.shutline.model.Progress;
+import org.shutline.topology.EdgeKind;
+
+/**
+ * Breadth-first gas flow over one {@link NetworkState}: through pipe edges of active
+ * mains, open valves, and in-service stations from inlet to outlet only. The state's
+ * flags are read once into arrays; the queue and adjacency buffer are reused, so one
+ * flow costs O(nodes + edges) and allocates only its result BitSet.
+ */
+final class Flow {
+    private final NetworkState s;
+    private final boolean[] mainActive;
+    private final BitSet closed;
+    private final boolean[] stationOn;
+    private final int[] queue;
+    private final int[] buf;
+    private final Progress progress;
+
+    Flow(NetworkState s, Progress progress) {
+        this.s = s;
+        this.progress = progress;
+        byte[] st = s.mainStatusOrdinals();
+        mainActive = new boolean[st.length];
+        for (int i = 0; i < st.length; i++) mainActive[i] = st[i] == MainStatus.ACTIVE.ordinal();
+        closed = s.closedValves();
+        stationOn = new boolean[s.stationCount()];
+        for (int i = 0; i < stationOn.length; i++) stationOn[i] = s.stationInService(i);
+        queue = new int[Math.max(1, s.nodeCount())];
+        buf = s.adjacencyBuffer();
+    }
+
+    boolean mainActive(int main) {
+        return mainActive[main];
+    }
+
+    /** True when gas can pass edge e starting at node v (e not removed). */
+    boolean passes(int e, int v) {
+        switch (s.edgeKind(e)) {
+            case EdgeKind.PIPE:
+                return mainActive[s.edgeFeature(e)];
+            case EdgeKind.VALVE:
+                return !closed.get(s.edgeFeature(e));
+            case EdgeKind.STATION:
+                return stationOn[s.edgeFeature(e)] && s.edgeFrom(e) == v && s.edgeTo(e) != v;
+            default:
+                return false;
+        }
+    }
+
+    /**
+     * Nodes reached from the given start nodes (negative entries ignored), never passing
+     * station {@code blockedStation} (-1 for none).
+     */
+    BitSet reach(int[] starts, int blockedStation) {
+        BitSet seen = new BitSet(s.nodeCount());
+        int head = 0, tail = 0;
+        for (int v : starts) {
+            if (v >= 0 && !seen.get(v)) {
+                seen.set(v);
+                queue[tail++] = v;
+            }
+        }
+        int steps = 0;
+        while (head < tail) {
+            int v = queue[head++];
+            if ((++steps & 0xFFF) == 0) progress.checkCancelled();
+            int c = s.incidentEdges(v, buf);
+            for (int i = 0; i < c; i++) {
+                int e = buf[i];
+                if (!passes(e, v)) continue;
+                if (blockedStation >= 0 && s.edgeKind(e) == EdgeKind.STATION && s.edgeFeature(e) == blockedStation) {
+                    continue;
+                }
+                int w = s.opposite(e, v);
+                if (!seen.get(w)) {
+                    seen.set(w);
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return seen;
+    }
+
+    /** Services fed when {@code live} is the set of live nodes: on a live pipe edge with live ends. */
+    BitSet fedServices(BitSet live) {
+        BitSet fed = new BitSet(s.serviceCount());
+        for (int i = 0; i < s.serviceCount(); i++) {
+            int e = s.serviceEdge(i);
+            if (e < 0 || s.isRemoved(e) || s.edgeKind(e) != EdgeKind.PIPE) continue;
+            if (mainActive[s.edgeFeature(e)] && live.get(s.edgeFrom(e))) fed.set(i);
+        }
+        return fed;
+    }
+
+    int[] sourceNodes() {
+        int[] a = new int[s.sourceCount()];
+        for (int i = 0; i < a.length; i++) a[i] = s.sourceNode(i);
+        return a;
+    }
+}
