@@ -1,0 +1,124 @@
+package org.shutline.analysis;
+
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.Comparator;
+import java.util.List;
+import org.shutline.analysis.hazard.StepContext;
+import org.shutline.model.Operability;
+import org.shutline.plan.StepAction;
+import org.shutline.plan.StepState;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.SegmentGraph;
+import org.shutline.trace.ValveSegments;
+
+/**
+ * Suggested operating order for a {@code close} step whose valves are listed without
+ * order ({@code ordered: false}): upstream feeds first, by the hop distance from the
+ * sources, in the segment graph of the state before the step, of the nearer side of
+ * each valve; ties by valve id. For each listed valve that is unknown or past its
+ * inspection interval, the fallback: the segments the step cuts off, grown across that
+ * valve to its far side, isolated again with {@link Isolation}; its extra valves and
+ * the services this adds.
+ */
+final class Suggestions {
+    private Suggestions() {}
+
+    static PlanEvaluation.Suggestion forStep(StepState st, StepContext.Settings settings) {
+        if (!(st.step().action() instanceof StepAction.CloseValves cv) || cv.ordered()) return null;
+        NetworkState s = st.before();
+        ValveSegments segs = ValveSegments.build(s);
+        SegmentGraph sg = segs.graph();
+        int[] hops = hops(sg);
+        List<Integer> valves = new ArrayList<>();
+        BitSet links = new BitSet();
+        for (String id : cv.valves()) {
+            int v = valveIndex(s, id);
+            if (v < 0) continue;
+            valves.add(v);
+            if (sg.valveLink(v) >= 0) links.set(sg.valveLink(v));
+        }
+        valves.sort(Comparator.<Integer>comparingInt(v -> hop(sg, hops, v)).thenComparing(v -> s.valveId(v)));
+        List<String> order = new ArrayList<>();
+        for (int v : valves) order.add(s.valveId(v));
+
+        BitSet fedBefore = sg.reachFromSources(null, null);
+        BitSet fedAfter = sg.reachFromSources(null, links);
+        BitSet zone = (BitSet) fedBefore.clone();
+        zone.andNot(fedAfter);
+        List<Isolation.Fallback> fallbacks = new ArrayList<>();
+        if (!zone.isEmpty()) {
+            BitSet offStep = new BitSet();
+            for (int g = zone.nextSetBit(0); g >= 0; g = zone.nextSetBit(g + 1)) for (int i : segs.services(g)) offStep.set(i);
+            Isolation iso = new Isolation(segs, new Isolation.Options(settings.asOf(), settings.inspectionInterval(), true));
+            for (int v : valves) {
+                int l = sg.valveLink(v);
+                if (l < 0) continue;
+                boolean doubtful = s.valveOperability(v) == Operability.UNKNOWN || overdue(s, v, settings);
+                if (!doubtful) continue;
+                BitSet grown = (BitSet) zone.clone();
+                grown.set(sg.linkA(l));
+                grown.set(sg.linkB(l));
+                Isolation.Result r = iso.isolate(new Zone.OfSegments(grown.stream().toArray()));
+                List<String> thenClose = new ArrayList<>(r.valveIds());
+                thenClose.removeAll(cv.valves());
+                BitSet adds = r.servicesOff();
+                adds.andNot(offStep);
+                List<String> addIds = new ArrayList<>();
+                long meters = 0;
+                for (int i = adds.nextSetBit(0); i >= 0; i = adds.nextSetBit(i + 1)) {
+                    addIds.add(s.network().services().get(i).id());
+                    meters += s.network().services().get(i).meters();
+                }
+                String why = s.valveOperability(v) == Operability.UNKNOWN ? "operability unknown" : "past its inspection interval";
+                fallbacks.add(new Isolation.Fallback(s.valveId(v), why, r.isolable(), r.valveIds(), thenClose, addIds, meters));
+            }
+        }
+        return new PlanEvaluation.Suggestion(order, fallbacks);
+    }
+
+    private static boolean overdue(NetworkState s, int v, StepContext.Settings settings) {
+        if (v >= s.graph().valveCount()) return false;
+        java.time.LocalDate c = s.valveChecked(v);
+        return c == null || c.plus(settings.inspectionInterval()).isBefore(settings.asOf());
+    }
+
+    private static int valveIndex(NetworkState s, String id) {
+        for (int v = 0; v < s.valveCount(); v++) if (s.valveId(v).equals(id)) return v;
+        return -1;
+    }
+
+    private static int hop(SegmentGraph sg, int[] hops, int v) {
+        int l = sg.valveLink(v);
+        if (l < 0) return Integer.MAX_VALUE;
+        return Math.min(hops[sg.linkA(l)], hops[sg.linkB(l)]);
+    }
+
+    /** Breadth-first hop counts from the source segments (MAX_VALUE when unreached). */
+    private static int[] hops(SegmentGraph sg) {
+        int n = sg.segmentCount();
+        int[] h = new int[n];
+        java.util.Arrays.fill(h, Integer.MAX_VALUE);
+        int[] q = new int[Math.max(1, n)];
+        int head = 0, tail = 0;
+        for (int i = 0; i < sg.sourceCount(); i++) {
+            int seg = sg.sourceSegment(i);
+            if (seg >= 0 && h[seg] == Integer.MAX_VALUE) {
+                h[seg] = 0;
+                q[tail++] = seg;
+            }
+        }
+        while (head < tail) {
+            int u = q[head++];
+            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
+                int l = sg.adjLink(i);
+                if (!sg.canFlow(l, u)) continue;
+                int w = sg.other(l, u);
+                if (h[w] != Integer.MAX_VALUE) continue;
+                h[w] = h[u] + 1;
+                q[tail++] = w;
+            }
+        }
+        return h;
+    }
+}

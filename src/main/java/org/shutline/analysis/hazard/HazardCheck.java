@@ -1,0 +1,18 @@
+package org.shutline.analysis.hazard;
+
+import java.util.List;
+
+/**
+ * A hazard rule. Implementations are stateless, have a public no-argument
+ * constructor (for {@link java.util.ServiceLoader}) and return an empty list when the
+ * state is sound.
+ */
+public interface HazardCheck {
+    /** The code of the hazards this rule raises, lower-case words joined by hyphens. */
+    String code();
+
+    /** One line saying what the rule looks for. */
+    String description();
+
+    List<Hazard> check(StepContext ctx);
+}

@@ -1,0 +1,33 @@
+package org.shutline.analysis.hazard;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.shutline.model.Severity;
+import org.shutline.model.Station;
+
+/**
+ * (b) A station with neither a monitor regulator ({@code monitor_kpa}) nor a relief
+ * device ({@code relief_kpa}) recorded: nothing limits the outlet pressure if the
+ * regulator fails open. Warning.
+ */
+public final class SecondaryProtectionCheck implements HazardCheck {
+    @Override public String code() { return "no-secondary-protection"; }
+
+    @Override public String description() {
+        return "station with no monitor or relief recorded";
+    }
+
+    @Override
+    public List<Hazard> check(StepContext ctx) {
+        List<Hazard> out = new ArrayList<>();
+        for (int i = 0; i < ctx.network().stations().size(); i++) {
+            Station st = ctx.network().stations().get(i);
+            if (st.hasSecondaryProtection() || !ctx.after().stationInService(i)) continue;
+            out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
+                    "Station " + st.id() + TapOnDeadMainCheck.label(st) + " has no monitor regulator or relief device recorded: "
+                            + "a regulator failure would pass inlet pressure into " + st.outSys() + ".",
+                    "Confirm the station's overpressure protection in the field; until then staff it during work that affects its sensing."));
+        }
+        return out;
+    }
+}

@@ -1,0 +1,97 @@
+package org.shutline.analysis.hazard;
+
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+import org.shutline.model.Operability;
+import org.shutline.model.Severity;
+import org.shutline.plan.WorkPoint;
+import org.shutline.topology.EdgeKind;
+import org.shutline.trace.FeedTrace;
+import org.shutline.trace.NetworkState;
+
+/**
+ * (e) A work point (a cut or a tie-in) that is still live when the step is carried out
+ * (in the state before the step): cutting a live main is critical; a tie-in on a live
+ * main is an error (it needs a live-insertion procedure). When the point is dead, the
+ * closed valves that keep gas off it are found (the closed valves on the edge of the
+ * dead pipe around the point whose far side is live); relying on an inoperable one is
+ * an error, on an unknown one or one past its inspection interval a warning.
+ */
+public final class WorkZoneCheck implements HazardCheck {
+    @Override public String code() { return "work-zone"; }
+
+    @Override public String description() {
+        return "cut or tie-in point live, or kept dead only by doubtful valves";
+    }
+
+    @Override
+    public List<Hazard> check(StepContext ctx) {
+        List<Hazard> out = new ArrayList<>();
+        if (ctx.step() == null) return out;
+        NetworkState s = ctx.before();
+        FeedTrace.Result tr = ctx.beforeTrace();
+        for (WorkPoint wp : ctx.step().workPoints()) {
+            if (tr.isEdgeLive(wp.edge())) {
+                boolean cut = wp.kind().equals("cut");
+                out.add(new Hazard(code(), cut ? Severity.CRITICAL : Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId()), wp.x(), wp.y(),
+                        "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is still live: "
+                                + (cut ? "cutting it releases gas." : "tying in there means working on a live main."),
+                        cut ? "Close the valves that isolate this point first (see the isolation of main " + wp.mainId() + ")."
+                                : "Isolate the tie-in point first, or plan a live-insertion procedure with its own controls."));
+                continue;
+            }
+            relied(ctx, s, tr, wp, out);
+        }
+        return out;
+    }
+
+    private void relied(StepContext ctx, NetworkState s, FeedTrace.Result tr, WorkPoint wp, List<Hazard> out) {
+        BitSet seen = new BitSet(s.nodeCount());
+        int[] stack = new int[64];
+        int top = 0;
+        stack[top++] = s.edgeFrom(wp.edge());
+        stack[top++] = s.edgeTo(wp.edge());
+        seen.set(s.edgeFrom(wp.edge()));
+        seen.set(s.edgeTo(wp.edge()));
+        Set<Integer> closed = new LinkedHashSet<>();
+        int[] buf = s.adjacencyBuffer();
+        while (top > 0) {
+            int v = stack[--top];
+            int n = s.incidentEdges(v, buf);
+            for (int i = 0; i < n; i++) {
+                int e = buf[i];
+                byte k = s.edgeKind(e);
+                if (k == EdgeKind.STATION) continue;
+                if (k == EdgeKind.VALVE && s.valveClosed(s.edgeFeature(e))) {
+                    if (tr.isLive(s.opposite(e, v))) closed.add(s.edgeFeature(e));
+                    continue;
+                }
+                if (k == EdgeKind.PIPE && !s.pipeLive(e)) continue;
+                int w = s.opposite(e, v);
+                if (seen.get(w)) continue;
+                seen.set(w);
+                if (top == stack.length) stack = java.util.Arrays.copyOf(stack, top * 2);
+                stack[top++] = w;
+            }
+        }
+        for (int v : closed) {
+            String id = s.valveId(v);
+            if (s.valveOperability(v) == Operability.NO) {
+                out.add(new Hazard(code(), Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
+                        "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
+                                + ", which is recorded inoperable and may not hold.",
+                        "Do not rely on " + id + ": close the next valve beyond it, or repair it before the step."));
+            } else if (ctx.doubtful(s, v)) {
+                String why = s.valveOperability(v) == Operability.UNKNOWN ? "of unknown condition"
+                        : "past its inspection interval (" + ctx.settings().inspectionInterval().toTotalMonths() + " months, 49 CFR 192.747)";
+                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
+                        "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
+                                + ", which is " + why + ".",
+                        "Operate and check " + id + " before the step, staff it while the work is open, and have its fallback valves ready."));
+            }
+        }
+    }
+}
