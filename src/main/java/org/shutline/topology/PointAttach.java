@@ -209,6 +209,7 @@ final class PointAttach {
             Point p = s.geometry();
             String mainId = s.mainId();
             if (mainId != null && !mainId.isBlank()) {
+                systemOf(s.systemId(), FindingCodes.SERVICES, s.id(), p);
                 byMainId(i, s, p, mainId, mains);
                 continue;
             }
