@@ -93,14 +93,18 @@ public final class Crs {
         return between(crs, wgs84());
     }
 
-    /** A transform from one CRS to another. */
+    /** A transform from one CRS to another; a point outside the target's domain gives {NaN, NaN}. */
     public static Transform between(CrsInfo from, CrsInfo to) {
         CoordinateReferenceSystem a = create(from);
         CoordinateReferenceSystem b = create(to);
         BasicCoordinateTransform t = new BasicCoordinateTransform(a, b);
         return (x, y) -> {
             ProjCoordinate out = new ProjCoordinate();
-            t.transform(new ProjCoordinate(x, y), out);
+            try {
+                t.transform(new ProjCoordinate(x, y), out);
+            } catch (Proj4jException e) {
+                return new double[] {Double.NaN, Double.NaN}; // outside the projection's domain
+            }
             return new double[] {out.x, out.y};
         };
     }
