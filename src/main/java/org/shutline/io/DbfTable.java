@@ -22,7 +22,7 @@ import java.util.Locale;
  * 8, record length at 10, little-endian; field descriptors of 32 bytes ended by
  * 0x0D). Text is decoded with the charset named by the {@code .cpg} file when there
  * is one, else by the language-driver byte (byte 29), else ISO-8859-1. Numbers come
- * back as {@code BigDecimal}, dates as {@code java.util.Date}, logicals as Boolean.
+ * back as {@code BigDecimal}, dates as {@code LocalDate}, logicals as Boolean.
  * Any inconsistency throws {@link InputException} naming the file (and record).
  */
 final class DbfTable {
@@ -49,12 +49,27 @@ final class DbfTable {
             for (rec = 1; rec <= count; rec++) {
                 Object[] row = r.nextRecord();
                 if (row == null) throw new InputException(dbf + ": truncated: record " + rec + " of " + count + " missing");
-                rows.add(Arrays.copyOf(row, row.length));
+                rows.add(dates(Arrays.copyOf(row, row.length)));
             }
         } catch (DBFException e) {
             throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": " + e.getMessage(), e);
         }
         return new Result(names, rows);
+    }
+
+    /**
+     * Dates as LocalDate: javadbf builds a {@code java.util.Date} in the default time
+     * zone from the 8 digits yyyymmdd; the empty date "00000000" comes out before
+     * year 1 and is read as null.
+     */
+    private static Object[] dates(Object[] row) {
+        for (int i = 0; i < row.length; i++) {
+            if (row[i] instanceof java.util.Date d) {
+                java.time.LocalDate ld = d.toInstant().atZone(java.time.ZoneId.systemDefault()).toLocalDate();
+                row[i] = ld.getYear() < 1 ? null : ld;
+            }
+        }
+        return row;
     }
 
     /** Returns the record count after checking the header against the file size. */

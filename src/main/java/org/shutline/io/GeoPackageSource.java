@@ -84,7 +84,7 @@ final class GeoPackageSource {
             while (rs.moveToNext()) {
                 FeatureRow row = rs.getRow();
                 Object[] vals = new Object[names.size()];
-                for (int i = 0; i < vals.length; i++) vals[i] = row.getValue(names.get(i));
+                for (int i = 0; i < vals.length; i++) vals[i] = plainDate(row.getValue(names.get(i)));
                 Geometry g = null;
                 String err = null;
                 GeoPackageGeometryData data = row.getGeometry();
@@ -102,6 +102,12 @@ final class GeoPackageSource {
             rs.close();
         }
         return new RawLayer(table, where, false, names, fs, crs);
+    }
+
+    /** NGA gives DATE and DATETIME columns as {@code java.util.Date} parsed in UTC: back to the calendar date. */
+    private static Object plainDate(Object v) {
+        if (v instanceof java.util.Date d) return d.toInstant().atZone(java.time.ZoneOffset.UTC).toLocalDate();
+        return v;
     }
 
     private static CrsInfo crs(SpatialReferenceSystem srs, String where) throws InputException {
