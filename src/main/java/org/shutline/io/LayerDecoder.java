@@ -29,7 +29,8 @@ import org.shutline.model.Words;
  *   name longer than 10 characters also matches its first 10 (dBASE's limit). A
  *   missing key field is an {@link InputException} naming file, layer and field; a
  *   missing optional field is one WARNING {@code missing-field} and its default.</li>
- * <li>No features: one WARNING {@code empty-layer}. Features of more than one
+ * <li>No features: one WARNING {@code empty-layer} and nothing else (its fields
+ *   are not checked). Features of more than one
  *   geometry class (line, point, polygon, other): one WARNING
  *   {@code mixed-geometry-types}.</li>
  * <li>A feature is skipped with an ERROR finding when its geometry is absent or
@@ -75,6 +76,11 @@ final class LayerDecoder {
     }
 
     static List<Row> decode(Schema.Layer layer, RawLayer raw, FieldMapping mapping, Findings findings) throws InputException {
+        if (raw.features().isEmpty()) {
+            findings.add(Finding.of("empty-layer", Severity.WARNING, layer.name(), "layer " + raw.name() + " (" + raw.where()
+                    + ") has no features"));
+            return List.of();
+        }
         LayerDecoder d = new LayerDecoder(layer, raw, mapping, findings);
         d.resolveFields();
         return d.rows();
@@ -106,9 +112,6 @@ final class LayerDecoder {
     }
 
     private List<Row> rows() {
-        if (raw.features().isEmpty()) {
-            findings.add(Finding.of("empty-layer", Severity.WARNING, layer.name(), "layer " + raw.name() + " has no features"));
-        }
         checkMixed();
         List<Row> out = new ArrayList<>(raw.features().size());
         Set<String> ids = new HashSet<>();

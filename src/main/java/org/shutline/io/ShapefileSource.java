@@ -40,9 +40,8 @@ final class ShapefileSource {
         String base = file.substring(0, file.length() - 4);
         Path shx = sibling(shp, base, ".shx");
         Path dbf = sibling(shp, base, ".dbf");
-        if (shx == null) throw new InputException(shp + ": no .shx index beside it (layer " + base + ")");
-        if (dbf == null) throw new InputException(shp + ": no .dbf table beside it (layer " + base + ")");
         ShpReader.Result geo = ShpReader.read(shp, shx);
+        if (dbf == null) throw new InputException(shp + ": no .dbf table beside it (layer " + base + ")");
         DbfTable.Result table = DbfTable.read(dbf, sibling(shp, base, ".cpg"));
         if (table.rows().size() != geo.geometries().size()) {
             throw new InputException(shp + ": " + geo.geometries().size() + " shapes but " + dbf.getFileName() + " has "

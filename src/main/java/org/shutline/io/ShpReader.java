@@ -52,10 +52,12 @@ final class ShpReader {
 
     private ShpReader() {}
 
+    /** Reads {@code shp} with its index {@code shx} (null when there is none: an error after the .shp header is checked). */
     static Result read(Path shp, Path shx) throws InputException {
         ByteBuffer s = load(shp);
-        ByteBuffer x = load(shx);
         int type = header(s, shp);
+        if (shx == null) throw new InputException(shp + ": no .shx index beside it");
+        ByteBuffer x = load(shx);
         int xtype = header(x, shx);
         if (xtype != type) {
             throw new InputException(shx + ": shape type " + xtype + " differs from " + shp.getFileName() + " (" + type + ")");

@@ -43,8 +43,10 @@ class RoundTripTest {
 
     @Test
     void geopackageAndShapefilesGiveTheSameModel() throws Exception {
+        var before = Snapshot.of(dir);
         Network a = NetworkReader.read(gpkg, FieldMapping.DEFAULT);
         Network b = NetworkReader.read(shapes, FieldMapping.DEFAULT);
+        assertThat(Snapshot.of(dir)).as("input files unchanged by reading").isEqualTo(before);
         assertThat(a.mains()).isEqualTo(b.mains());
         assertThat(a.valves()).isEqualTo(b.valves());
         assertThat(a.stations()).isEqualTo(b.stations());
