@@ -95,4 +95,38 @@ class CrsTest {
         assertThatThrownBy(() -> Crs.fromWkt("PROJCS[\"x\"", "bad.prj")).isInstanceOf(InputException.class)
                 .hasMessageContaining("bad.prj");
     }
+    @Test
+    void lambertOneParallelInInternationalFeetMatchesCs2cs() throws Exception {
+        assumeTrue(Gdal.has("cs2cs"), "cs2cs not installed: skipped");
+        // ESRI style: one Lambert name, the 1SP form told by a single standard parallel and a scale factor
+        String wkt = "PROJCS[\"Test_LCC_1SP\",GEOGCS[\"GCS_WGS_1984\",DATUM[\"D_WGS_1984\",SPHEROID[\"WGS_1984\","
+                + "6378137.0,298.257223563]],PRIMEM[\"Greenwich\",0.0],UNIT[\"Degree\",0.0174532925199433]],"
+                + "PROJECTION[\"Lambert_Conformal_Conic\"],PARAMETER[\"False_Easting\",500000.0],"
+                + "PARAMETER[\"False_Northing\",300000.0],PARAMETER[\"Central_Meridian\",-77.0],"
+                + "PARAMETER[\"Standard_Parallel_1\",18.0],PARAMETER[\"Scale_Factor\",0.9995],"
+                + "PARAMETER[\"Latitude_Of_Origin\",18.0],UNIT[\"Foot\",0.3048]]";
+        CrsInfo crs = Crs.fromWkt(wkt, "t.prj");
+        assertThat(crs.unit()).isEqualTo(LinearUnit.INTERNATIONAL_FOOT);
+        double[] ours = Crs.toLonLat(crs).apply(1650000, 1000000);
+        double[] ref = cs2cs(wkt, "EPSG:4326", 1650000, 1000000); // PROJ cs2cs reads the ESRI WKT itself
+        assertThat(ours[0]).isCloseTo(ref[1], within(1e-8));
+        assertThat(ours[1]).isCloseTo(ref[0], within(1e-8));
+    }
+
+    @Test
+    void aLayerInAnotherCrsIsReprojectedToTheMainsCrs() throws Exception {
+        assumeTrue(Gdal.has("ogr2ogr") && Gdal.has("cs2cs"), "ogr2ogr/cs2cs not installed: skipped");
+        Path mains = TestNetworks.write(dir.resolve("json"), "mains", TestNetworks.mains());
+        String streets = "{\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\",\"geometry\":"
+                + "{\"type\":\"LineString\",\"coordinates\":[[-75.0,38.85],[-74.99,38.85]]},\"properties\":{\"name\":\"Ash Row\"}}]}";
+        Path gpkg = Gdal.toGpkg(dir.resolve("two.gpkg"), List.of(mains, TestNetworks.write(dir.resolve("json"), "streets", streets)));
+        Network n = NetworkReader.read(gpkg, FieldMapping.DEFAULT);
+        assertThat(n.crs().epsg()).isEqualTo(32618);
+        Coordinate c = n.context().get(0).items().get(0).geometry().getCoordinates()[0];
+        double[] ref = cs2cs("EPSG:4326", "EPSG:32618", 38.85, -75.0); // PROJ cs2cs, lat lon order
+        assertThat(c.x).isCloseTo(ref[0], within(0.001));
+        assertThat(c.y).isCloseTo(ref[1], within(0.001));
+        assertThat(n.readFindings()).filteredOn(f -> f.code().equals("reprojected")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("streets", "EPSG:4326", "EPSG:32618"));
+    }
 }
