@@ -23,8 +23,8 @@ import org.locationtech.jts.io.WKBReader;
 import org.shutline.model.CrsInfo;
 
 /**
- * Reads every feature table of a GeoPackage, opened read-only with NGA's
- * {@code GeoPackageManager.open(file, false)}, into {@link RawLayer}s in the order
+ * Reads every feature table of a GeoPackage, opened read-only and validated with
+ * NGA's {@code GeoPackageManager.open(false, file, true)}, into {@link RawLayer}s in the order
  * the GeoPackage lists them. Geometry: the row's {@code GeoPackageGeometryData} WKB
  * read by JTS {@code WKBReader}. CRS: from the table's {@code gpkg_spatial_ref_sys}
  * row, by its organization's EPSG code when it has one, else by its WKT definition;
@@ -41,7 +41,8 @@ final class GeoPackageSource {
         checkMagic(file);
         GeoPackage gp;
         try {
-            gp = GeoPackageManager.open(file.toFile(), false);
+            // open(writable, file, validate): NGA's two-argument open(file, boolean) takes "validate", not "writable"
+            gp = GeoPackageManager.open(false, file.toFile(), true);
         } catch (GeoPackageException e) {
             throw new InputException(file + ": not a readable GeoPackage: " + e.getMessage(), e);
         }

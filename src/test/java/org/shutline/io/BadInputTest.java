@@ -185,6 +185,15 @@ class BadInputTest {
     }
 
     @Test
+    void sqliteDatabaseThatIsNotAGeoPackage() throws Exception {
+        Path json = TestNetworks.write(dir.resolve("json"), "mains", TestNetworks.mains());
+        Path f = dir.resolve("plain.gpkg");
+        Gdal.run(null, "ogr2ogr", "-f", "SQLite", f.toString(), json.toString()); // plain SQLite, no GeoPackage tables
+        InputException e = readFails(f);
+        assertThat(e).hasMessageContaining("plain.gpkg").hasMessageContaining("not a readable GeoPackage");
+    }
+
+    @Test
     void emptyLayerIsAWarning() throws Exception {
         Path shp = shapes("mains");
         shapesOf("valves", TestNetworks.collection(), "-nlt", "POINT");
