@@ -25,7 +25,8 @@ import org.shutline.model.Tolerances;
  * {@code tolerances} ({@code snap_m}, {@code point_m}, {@code service_m}). Any other
  * key, an unknown layer, an unknown field of a layer, or a value word that is not one
  * of ours makes {@link #load} throw an {@link InputException} naming the file and the
- * key. Their layer and field names are matched case-insensitively by the reader;
+ * key. An unquoted {@code yes} or {@code no} as a target word (a YAML boolean) is
+ * taken as the word. Their layer and field names are matched case-insensitively by the reader;
  * their value words are matched case-insensitively here. Immutable.
  */
 public final class FieldMapping {
@@ -150,7 +151,10 @@ public final class FieldMapping {
                 Map<String, String> words = new HashMap<>();
                 for (Iterator<Map.Entry<String, JsonNode>> w = e.getValue().fields(); w.hasNext(); ) {
                     Map.Entry<String, JsonNode> we = w.next();
-                    String ours = text(we.getValue(), key + "." + we.getKey());
+                    JsonNode target = we.getValue();
+                    // YAML 1.1 reads unquoted yes/no as booleans: they stand for our words "yes" and "no"
+                    String ours = target.isBoolean() ? (target.booleanValue() ? "yes" : "no")
+                            : text(target, key + "." + we.getKey());
                     if (org.shutline.model.Words.parse(wordsOf(field), ours).isEmpty()) {
                         throw new InputException(file + ": key '" + key + "." + we.getKey() + "': '" + ours
                                 + "' is not a value of " + field.name());

@@ -42,6 +42,14 @@ class FieldMappingTest {
     }
 
     @Test
+    void unquotedYesAndNoAreWords() throws Exception {
+        FieldMapping m = FieldMapping.load(yaml("layers:\n  valves: { values: { operable: { Y: yes, N: no, U: unknown } } }\n"));
+        assertThat(m.valueWord("valves", "operable", "y")).isEqualTo("yes");
+        assertThat(m.valueWord("valves", "operable", "N")).isEqualTo("no");
+        assertThat(m.valueWord("valves", "operable", "u")).isEqualTo("unknown");
+    }
+
+    @Test
     void unknownKeysNameTheFileAndKey() throws Exception {
         for (String[] c : List.of(
                 new String[] {"layer:\n  mains: {name: X}\n", "'layer'"},
