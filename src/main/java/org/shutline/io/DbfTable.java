@@ -13,6 +13,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.List;
 import java.util.Locale;
 
@@ -26,8 +27,20 @@ import java.util.Locale;
  * Any inconsistency throws {@link InputException} naming the file (and record).
  */
 final class DbfTable {
-    /** Field names in file order and one value array per record. */
-    record Result(List<String> fields, List<Object[]> rows) {}
+    /**
+     * Field names in file order, one value array per record (deleted ones
+     * included, so that rows stay aligned with the shapes), and which records
+     * (0-based) carry dBASE's deletion mark '*'.
+     */
+    record Result(List<String> fields, List<Object[]> rows, BitSet deleted) {
+        Result {
+            deleted = (BitSet) deleted.clone();
+        }
+
+        boolean isDeleted(int row) {
+            return deleted.get(row);
+        }
+    }
 
     private DbfTable() {}
 
@@ -43,7 +56,11 @@ final class DbfTable {
         List<String> names = new ArrayList<>();
         List<Object[]> rows = new ArrayList<>(count);
         int rec = 0;
-        try (DBFReader r = new DBFReader(new ByteArrayInputStream(bytes), cs)) {
+        BitSet deleted = new BitSet();
+        int headerLen = le16(bytes, 8);
+        int recLen = le16(bytes, 10);
+        for (int i = 0; i < count; i++) if (bytes[headerLen + i * recLen] == '*') deleted.set(i);
+        try (DBFReader r = new DBFReader(new ByteArrayInputStream(bytes), cs, true)) {
             if (r.getRecordCount() != count) throw new InputException(dbf + ": corrupt header (record count)");
             for (int i = 0; i < r.getFieldCount(); i++) names.add(r.getField(i).getName());
             for (rec = 1; rec <= count; rec++) {
@@ -54,7 +71,7 @@ final class DbfTable {
         } catch (DBFException e) {
             throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": " + e.getMessage(), e);
         }
-        return new Result(names, rows);
+        return new Result(names, rows, deleted);
     }
 
     /**

@@ -17,7 +17,8 @@ import org.shutline.model.CrsInfo;
  * optional {@code .prj} and {@code .cpg}, extensions matched ignoring case) in one
  * folder into {@link RawLayer}s named by base name, sorted by name. Record counts
  * of {@code .shp}, {@code .shx} and {@code .dbf} must agree; a missing
- * {@code .shx} or {@code .dbf} is an {@link InputException}. A layer without
+ * {@code .shx} or {@code .dbf} is an {@link InputException}. Records marked deleted
+ * in the {@code .dbf} are left out. A layer without
  * {@code .prj} has a null CRS (the caller decides). Files are only read.
  */
 final class ShapefileSource {
@@ -58,6 +59,7 @@ final class ShapefileSource {
         }
         List<RawLayer.Feature> fs = new ArrayList<>(geo.geometries().size());
         for (int i = 0; i < geo.geometries().size(); i++) {
+            if (table.isDeleted(i)) continue; // marked deleted in the .dbf: not a feature (as GDAL reads it)
             Geometry g = geo.geometries().get(i);
             fs.add(new RawLayer.Feature(i + 1, g == null || g.isEmpty() ? null : g, null,
                     Arrays.asList(table.rows().get(i))));

@@ -242,6 +242,24 @@ class BadInputTest {
     }
 
     @Test
+    void recordsMarkedDeletedInTheDbfAreLeftOutAsGdalDoes() throws Exception {
+        assumeTrue(Gdal.has("ogrinfo"), "ogrinfo not installed: skipped");
+        Path shp = shapes("mains");
+        Path dbf = shp.resolve("mains.dbf");
+        try (RandomAccessFile raf = new RandomAccessFile(dbf.toFile(), "rw")) {
+            raf.seek(8);
+            int headerLen = Short.reverseBytes(raf.readShort()) & 0xffff;
+            int recLen = Short.reverseBytes(raf.readShort()) & 0xffff;
+            raf.seek(headerLen + recLen); // second record
+            raf.write('*');
+        }
+        Network n = readOk(shp);
+        assertThat(n.mains()).extracting(m -> m.id()).containsExactly("M1", "M3", "M4");
+        // GDAL ogrinfo skips deleted records when it iterates (its -so "Feature Count" is the .shx count, 4)
+        assertThat(Gdal.iteratedCount(shp.resolve("mains.shp"), "mains")).isEqualTo(3);
+    }
+
+    @Test
     void emptyGeometryIsSkipped() throws Exception {
         Path json = TestNetworks.write(dir.resolve("json"), "mains", TestNetworks.collection(
                 TestNetworks.feature(TestNetworks.line(0, 0, 10, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\""),

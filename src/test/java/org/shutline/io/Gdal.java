@@ -72,6 +72,15 @@ final class Gdal {
         return counts;
     }
 
+    /** Features GDAL returns when it iterates a layer: "OGRFeature(layer):fid" lines of {@code ogrinfo -al}. */
+    static int iteratedCount(Path data, String layer) throws IOException, InterruptedException {
+        String out = run(null, "ogrinfo", "-ro", "-al", "-q", data.toString(), layer);
+        Matcher m = Pattern.compile("OGRFeature\\(" + Pattern.quote(layer) + "\\):").matcher(out);
+        int n = 0;
+        while (m.find()) n++;
+        return n;
+    }
+
     static String base(Path p) {
         String n = p.getFileName().toString();
         return n.substring(0, n.lastIndexOf('.'));
