@@ -1,7 +1,31 @@
 package org.shutline.cli;
 
-public final class Main {
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code shutline} command: one subcommand class per command, registered here.
+ * Exit codes: 0 done (for {@code check}: no error findings), 1 {@code check} found
+ * errors, 2 the input could not be read or the command line is wrong.
+ */
+@Command(name = "shutline", mixinStandardHelpOptions = true, version = "shutline 0.1.0",
+    description = "Gas distribution outage zoning: network check, feed trace, valve isolation, work plans, maps.",
+    subcommands = {CheckCommand.class, GenerateCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
     public static void main(String[] args) {
-        System.out.println("shutline");
+        System.exit(commandLine().execute(args));
+    }
+
+    /** The configured command line (used by {@link #main} and the tests). */
+    public static CommandLine commandLine() {
+        return new CommandLine(new Main());
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
     }
 }
