@@ -16,6 +16,11 @@ public final class Main implements Runnable {
     private CommandLine.Model.CommandSpec spec;
 
     public static void main(String[] args) {
+        // The GeoPackage library logs through SLF4J and no provider is bundled: without this,
+        // SLF4J prints a three-line notice about that on every run.
+        if (System.getProperty("slf4j.internal.verbosity") == null) {
+            System.setProperty("slf4j.internal.verbosity", "ERROR");
+        }
         System.exit(commandLine().execute(args));
     }
 
