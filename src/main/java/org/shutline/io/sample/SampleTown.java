@@ -361,7 +361,7 @@ public final class SampleTown {
                     address, point(x, y)));
             }
         }
-        critical("SV-C-CLINIC", "clinic", "LP-NORTH", lp(6, 9), 2, "Hazel Row Clinic, 611 Hazel Row");
+        critical("SV-C-CLINIC", "clinic", "LP-NORTH", lp(6, 9), 2, "Larch Road Clinic, 611 Larch Road");
         critical("SV-C-SCHOOL1", "school", "LP-NORTH", lp(10, 8), 1, "Juniper Street School, 1020 Juniper Street");
         critical("SV-C-SCHOOL2", "school", "LP-EAST", lp(13, 2), 1, "Cedar Walk School, 1340 Cedar Walk");
         critical("SV-C-CARE", "care home", "LP-SOUTH", new Coordinate(lp(4, 4).x + 30, lp(4, 4).y),
