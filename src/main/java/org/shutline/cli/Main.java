@@ -1,7 +1,52 @@
 package org.shutline.cli;
 
-public final class Main {
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code shutline} command: one subcommand class per command, registered here.
+ * Exit codes: 0 done (for {@code check}: no error findings), 1 {@code check} found
+ * errors, 2 the input could not be read or the command line is wrong, 3 an internal
+ * error (the exception and where it was thrown go to stderr for a bug report).
+ */
+@Command(name = "shutline", mixinStandardHelpOptions = true, version = "shutline 0.1.0",
+    description = "Gas distribution outage zoning: network check, feed trace, valve isolation, work plans, maps.",
+    subcommands = {CheckCommand.class, GenerateCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    /** Exit code for a failure inside Shutline itself (a bug), distinct from 1 (errors found) and 2 (bad input). */
+    public static final int INTERNAL_ERROR = 3;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
     public static void main(String[] args) {
-        System.out.println("shutline");
+        // The GeoPackage library logs through SLF4J and no provider is bundled: without this,
+        // SLF4J prints a three-line notice about that on every run.
+        if (System.getProperty("slf4j.internal.verbosity") == null) {
+            System.setProperty("slf4j.internal.verbosity", "ERROR");
+        }
+        System.exit(commandLine().execute(args));
+    }
+
+    /** The configured command line (used by {@link #main} and the tests). */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setExecutionExceptionHandler((e, line, parsed) -> {
+            // a broken contract inside Shutline, not bad input: say so, with where it happened
+            line.getErr().println("shutline: internal error: " + e);
+            for (Throwable t = e; t != null; t = t.getCause()) {
+                if (t != e) line.getErr().println("  caused by: " + t);
+                StackTraceElement[] st = t.getStackTrace();
+                if (st.length > 0) line.getErr().println("    at " + st[0]);
+            }
+            line.getErr().flush();
+            return INTERNAL_ERROR;
+        });
+        return cl;
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
     }
 }
