@@ -1,0 +1,180 @@
+package org.shutline.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.Zone;
+import org.shutline.io.InputException;
+import org.shutline.model.Caution;
+import org.shutline.model.Network;
+import org.shutline.model.Progress;
+import org.shutline.topology.Topology;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.ValveSegments;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline isolate NETWORK (--at X,Y [--system ID] | --main ID) [--format text|json]}:
+ * the valves to close so that no live source reaches the zone, in operating order, the
+ * fallback for each doubtful valve, services, meters and critical customers off, and
+ * whether valves alone can do it. See docs/cli.md for the JSON keys.
+ */
+@Command(name = "isolate", mixinStandardHelpOptions = true,
+    description = "Valve isolation of a point or a main: valves to close, fallbacks, customers off.")
+public final class IsolateCommand implements Callable<Integer> {
+    enum Format { text, json }
+
+    static final class Where {
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", description = "a point in the network CRS; the nearest active main is taken")
+        double[] at;
+
+        @Option(names = "--main", paramLabel = "ID", description = "a main id")
+        String main;
+    }
+
+    @Spec private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
+    private Path network;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    private Where where;
+
+    @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
+    private String system;
+
+    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
+    private Path mapping;
+
+    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
+    private LocalDate asOf;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    private Format format;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Topology t;
+        try {
+            t = NetworkInput.load(network, mapping, Progress.NONE);
+        } catch (InputException e) {
+            err.println(e.getMessage());
+            err.flush();
+            return 2;
+        }
+        if (where.at != null && where.at.length != 2) {
+            err.println("isolate: --at takes X,Y");
+            err.flush();
+            return 2;
+        }
+        if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
+            err.println("isolate: no main with id '" + where.main + "' in " + network);
+            err.flush();
+            return 2;
+        }
+        Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
+        ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        Isolation iso = new Isolation(segs, Isolation.Options.asOf(asOf == null ? LocalDate.now() : asOf));
+        Isolation.Result r;
+        try {
+            r = iso.isolate(zone);
+        } catch (IllegalArgumentException e) {
+            err.println("isolate: " + e.getMessage());
+            err.flush();
+            return 2;
+        }
+        out.print(format == Format.json ? Json.write(json(t.network(), r)) : text(t.network(), r));
+        out.flush();
+        return 0;
+    }
+
+    private String zoneText() {
+        return where.main != null ? "main " + where.main
+                : String.format(Locale.ROOT, "point (%.1f, %.1f)%s", where.at[0], where.at[1], system == null ? "" : " on " + system);
+    }
+
+    static ObjectNode json(Network net, Isolation.Result r) {
+        ObjectNode root = Json.object();
+        root.put("isolable", r.isolable());
+        if (!r.isolable()) root.put("reason", r.reason());
+        root.set("valves_to_close", Json.strings(r.valveIds()));
+        ArrayNode fb = root.putArray("fallbacks");
+        for (Isolation.Fallback f : r.fallbacks()) {
+            ObjectNode o = fb.addObject();
+            o.put("valve", f.valveId());
+            o.put("why", f.why());
+            o.set("then_close", Json.strings(f.thenClose()));
+            o.put("adds_services", f.addedServices().size());
+            o.put("adds_meters", f.addedMeters());
+            o.set("added_service_ids", Json.strings(f.addedServices()));
+        }
+        root.put("services_off", r.serviceIdsOff().size());
+        root.put("meters_off", r.metersOff());
+        root.set("critical_off", Json.strings(r.criticalOff()));
+        root.set("stations_to_stop", Json.strings(r.stationsToStop()));
+        root.set("station_inlet_valves", Json.strings(r.stationInletValves()));
+        root.set("sources_in_region", Json.strings(r.sourcesInRegion()));
+        root.set("closed_boundary_valves", Json.strings(r.closedBoundaryValves()));
+        root.put("unintended_segments", r.unintended().cardinality());
+        r.alternative().ifPresent(a -> {
+            ObjectNode o = root.putObject("alternative");
+            o.set("valves", Json.strings(a.valves()));
+            o.put("adds_services", a.addedServices().size());
+            o.put("adds_meters", a.addedMeters());
+        });
+        root.set("service_ids_off", Json.strings(r.serviceIdsOff()));
+        root.put("caution", Caution.TEXT);
+        return root;
+    }
+
+    private String text(Network net, Isolation.Result r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Isolation of ").append(zoneText()).append(" in ").append(net.sourceName()).append("\n\n");
+        if (!r.isolable()) {
+            sb.append("NOT ISOLABLE BY VALVES ALONE: ").append(r.reason()).append('\n');
+            if (!r.stationsToStop().isEmpty()) sb.append("  stop stations: ").append(String.join(", ", r.stationsToStop())).append('\n');
+            if (!r.stationInletValves().isEmpty()) sb.append("  their inlet valves: ").append(String.join(", ", r.stationInletValves())).append('\n');
+            sb.append('\n');
+        }
+        sb.append("Valves to close, in order:\n");
+        for (Isolation.ValveStep v : r.valves()) {
+            sb.append(String.format(Locale.ROOT, "  %2d. %-10s operable %-7s%s%n", v.order(), v.valveId(),
+                    v.operable().name().toLowerCase(Locale.ROOT), v.overdue() ? "  past inspection interval" : ""));
+        }
+        if (r.valves().isEmpty()) sb.append("  (none)\n");
+        if (!r.fallbacks().isEmpty()) {
+            sb.append("\nIf a valve will not close:\n");
+            for (Isolation.Fallback f : r.fallbacks()) {
+                sb.append("  ").append(f.valveId()).append(" (").append(f.why()).append("): then close ")
+                        .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
+                        .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
+                        .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
+            }
+        }
+        r.alternative().ifPresent(a -> sb.append("\nAlternative with fewer valves: ").append(String.join(", ", a.valves()))
+                .append(" (adds ").append(a.addedServices().size()).append(" services)\n"));
+        sb.append(String.format(Locale.ROOT, "%nServices off %d, meters off %d, unintended segments %d%n", r.serviceIdsOff().size(), r.metersOff(),
+                r.unintended().cardinality()));
+        if (!r.criticalOff().isEmpty()) sb.append("Critical customers off: ").append(String.join(", ", r.criticalOff())).append('\n');
+        if (!r.closedBoundaryValves().isEmpty()) {
+            sb.append("Already closed on the boundary (not listed): ").append(String.join(", ", r.closedBoundaryValves())).append('\n');
+        }
+        List<String> ids = TraceCommand.first(r.serviceIdsOff(), 25);
+        if (!ids.isEmpty()) sb.append("Off: ").append(String.join(", ", ids)).append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
+        return sb.toString();
+    }
+}

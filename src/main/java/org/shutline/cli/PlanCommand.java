@@ -1,0 +1,282 @@
+package org.shutline.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.time.Period;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.PlanEvaluation;
+import org.shutline.analysis.hazard.Hazard;
+import org.shutline.analysis.hazard.HazardChecks;
+import org.shutline.analysis.hazard.StepContext;
+import org.shutline.io.AtomicFiles;
+import org.shutline.io.InputException;
+import org.shutline.model.Caution;
+import org.shutline.model.PressureUnit;
+import org.shutline.model.Progress;
+import org.shutline.model.ServiceClass;
+import org.shutline.model.Severity;
+import org.shutline.model.Words;
+import org.shutline.plan.Plan;
+import org.shutline.plan.PlanApplier;
+import org.shutline.plan.PlanException;
+import org.shutline.plan.PlanReader;
+import org.shutline.plan.PlanStates;
+import org.shutline.report.Csv;
+import org.shutline.topology.Topology;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline plan NETWORK PLAN [--format text|json|csv] [--out DIR]}: evaluates
+ * every step of a work plan (docs/plan-format.md) and prints a per-step table (step,
+ * action, services off, meters off, critical customers off, hazards) and the hazards
+ * with the action to take. Exit 0 when no step raises a critical hazard, 1 when one
+ * does, 2 when the network or plan cannot be read or applied.
+ */
+@Command(name = "plan", mixinStandardHelpOptions = true,
+    description = "Evaluate a work plan step by step: customers off gas, valves, hazards.")
+public final class PlanCommand implements Callable<Integer> {
+    enum Format { text, json, csv }
+
+    @Spec private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
+    private Path network;
+
+    @Parameters(index = "1", paramLabel = "PLAN", description = "the work plan (YAML)")
+    private Path planFile;
+
+    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
+    private Path mapping;
+
+    @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default: ${DEFAULT-VALUE})")
+    private Format format;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "also write plan-steps.csv, plan-hazards.csv and plan.json into DIR")
+    private Path out;
+
+    @Option(names = "--unit", paramLabel = "UNIT", description = "pressure unit for messages: kPa, psi, in_wc, mbar (default: the plan's)")
+    private String unit;
+
+    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
+    private LocalDate asOf;
+
+    @Option(names = "--inspection-months", defaultValue = "15", description = "valve inspection interval in months (default: ${DEFAULT-VALUE}, 49 CFR 192.747)")
+    private int inspectionMonths;
+
+    @Override
+    public Integer call() {
+        PrintWriter o = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        PlanEvaluation.Result r;
+        try {
+            r = evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, Progress.NONE);
+        } catch (InputException | PlanException e) {
+            err.println(e.getMessage());
+            err.flush();
+            return 2;
+        }
+        String text = switch (format) {
+            case json -> Json.write(json(r));
+            case csv -> stepsCsv(r);
+            default -> text(r);
+        };
+        o.print(text);
+        o.flush();
+        if (out != null) {
+            try {
+                AtomicFiles.writeString(out.resolve("plan-steps.csv"), stepsCsv(r));
+                AtomicFiles.writeString(out.resolve("plan-hazards.csv"), hazardsCsv(r));
+                AtomicFiles.writeString(out.resolve("plan.json"), Json.write(json(r)));
+            } catch (IOException e) {
+                err.println("plan: cannot write to " + out + ": " + e.getMessage());
+                err.flush();
+                return 2;
+            }
+        }
+        return r.hasCritical() ? 1 : 0;
+    }
+
+    /** Read, apply and evaluate; shared with the window and the export commands. */
+    public static PlanEvaluation.Result evaluate(Path network, Path mapping, Path planFile, String unit, LocalDate asOf,
+                                                 int inspectionMonths, Progress progress) throws InputException, PlanException {
+        Topology t = NetworkInput.load(network, mapping, progress);
+        Plan plan = PlanReader.read(planFile);
+        PressureUnit pu = plan.pressureUnit();
+        if (unit != null) {
+            pu = PressureUnit.parse(unit).orElseThrow(() -> new PlanException("unknown pressure unit '" + unit + "'", 0));
+        }
+        PlanStates ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
+        StepContext.Settings settings = new StepContext.Settings(asOf == null ? LocalDate.now() : asOf,
+                Period.ofMonths(inspectionMonths), pu);
+        return PlanEvaluation.evaluate(ps, HazardChecks.discover(), settings, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M, progress);
+    }
+
+    static String hazardCodes(List<Hazard> hs) {
+        List<String> s = new ArrayList<>();
+        for (Hazard h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + ")");
+        return String.join("; ", s);
+    }
+
+    private String text(PlanEvaluation.Result r) {
+        Plan p = r.states().plan();
+        StringBuilder sb = new StringBuilder();
+        sb.append("Work plan: ").append(p.project()).append("\nNetwork: ").append(r.states().base().network().sourceName())
+                .append("\nPlan file: ").append(planFile).append("\n\n");
+        if (!r.recordedHazards().isEmpty()) {
+            sb.append("In the network as recorded (before step 1):\n");
+            for (Hazard h : r.recordedHazards()) hazard(sb, h);
+            sb.append('\n');
+        }
+        sb.append(String.format(Locale.ROOT, "%4s %-5s %-58s %8s %7s %8s  %s%n", "step", "phase", "action", "svc off", "mtr off", "crit off", "hazards (new at this step)"));
+        for (PlanEvaluation.StepResult s : r.steps()) {
+            String action = s.step().describe();
+            if (action.length() > 58) action = action.substring(0, 55) + "...";
+            sb.append(String.format(Locale.ROOT, "%4d %-5d %-58s %8d %7d %8d  %s%s%n", s.step().number(), s.step().phase() + 1, action,
+                    s.servicesOff(), s.metersOff(), s.criticalOff().size(), hazardCodes(s.hazards()),
+                    s.continuing().isEmpty() ? "" : (s.hazards().isEmpty() ? "" : "; ") + "(" + s.continuing().size() + " continuing)"));
+        }
+        sb.append("\nPhases:\n");
+        for (PlanEvaluation.PhaseResult ph : r.phases()) {
+            sb.append(String.format(Locale.ROOT, "  %d. %-40s customer-hours off gas %.1f; off at end of phase %d%n", ph.index() + 1,
+                    ph.phase().name(), ph.customerHours(), ph.servicesOffAtEnd()));
+        }
+        boolean any = false;
+        for (PlanEvaluation.StepResult s : r.steps()) {
+            if (s.hazards().isEmpty() && s.notices().isEmpty() && s.suggestion() == null && s.criticalOff().isEmpty()) continue;
+            if (!any) sb.append("\nFindings by step:\n");
+            any = true;
+            sb.append("\nStep ").append(s.step().number()).append(": ").append(s.step().describe()).append('\n');
+            for (Hazard h : s.hazards()) hazard(sb, h);
+            for (String n : s.notices()) sb.append("  note: ").append(n).append('\n');
+            for (PlanEvaluation.CriticalOff c : s.criticalOff()) {
+                sb.append("  critical customer off: ").append(c.serviceId()).append(" ").append(c.kind())
+                        .append(c.address() == null ? "" : ", " + c.address()).append('\n');
+            }
+            if (s.suggestion() != null) {
+                sb.append("  suggested order: ").append(String.join(", ", s.suggestion().order())).append('\n');
+                for (Isolation.Fallback f : s.suggestion().fallbacks()) {
+                    sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): close ")
+                            .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
+                            .append(", adding ").append(f.addedServices().size()).append(" services\n");
+                }
+            }
+        }
+        long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(h -> h.severity() == Severity.CRITICAL).count();
+        sb.append('\n').append(crit == 0 ? "Result: no critical hazard raised by the plan (exit 0)."
+                : "Result: " + crit + " critical hazard(s) raised by the plan (exit 1).").append('\n');
+        sb.append('\n').append(Caution.TEXT).append('\n');
+        return sb.toString();
+    }
+
+    private static void hazard(StringBuilder sb, Hazard h) {
+        sb.append("  [").append(Words.word(h.severity()).toUpperCase(Locale.ROOT)).append("] ").append(h.code()).append(": ")
+                .append(h.message()).append("\n    action: ").append(h.action()).append('\n');
+    }
+
+    static ObjectNode hazardJson(ArrayNode a, Hazard h) {
+        ObjectNode o = a.addObject();
+        o.put("code", h.code());
+        o.put("severity", Words.word(h.severity()));
+        o.put("step", h.step());
+        o.set("features", Json.strings(h.features()));
+        if (!Double.isNaN(h.x())) {
+            o.put("x", h.x());
+            o.put("y", h.y());
+        }
+        o.put("message", h.message());
+        o.put("action", h.action());
+        return o;
+    }
+
+    static ObjectNode json(PlanEvaluation.Result r) {
+        Plan p = r.states().plan();
+        ObjectNode root = Json.object();
+        root.put("project", p.project());
+        root.put("network", r.states().base().network().sourceName());
+        root.put("critical", r.hasCritical());
+        ArrayNode rec = root.putArray("recorded_hazards");
+        for (Hazard h : r.recordedHazards()) hazardJson(rec, h);
+        ArrayNode steps = root.putArray("steps");
+        for (PlanEvaluation.StepResult s : r.steps()) {
+            ObjectNode o = steps.addObject();
+            o.put("step", s.step().number());
+            o.put("phase", s.step().phase() + 1);
+            o.put("phase_name", p.phases().get(s.step().phase()).name());
+            o.put("action", s.step().describe());
+            o.put("kind", s.step().action().key());
+            o.put("services_off", s.servicesOff());
+            o.put("meters_off", s.metersOff());
+            List<String> crit = new ArrayList<>();
+            for (PlanEvaluation.CriticalOff c : s.criticalOff()) crit.add(c.serviceId());
+            o.set("critical_off", Json.strings(crit));
+            ObjectNode byClass = o.putObject("services_off_by_class");
+            for (ServiceClass c : ServiceClass.values()) byClass.put(Words.word(c), s.servicesOffByClass().getOrDefault(c, 0));
+            o.set("went_off", Json.strings(s.wentOff()));
+            o.set("came_back", Json.strings(s.cameBack()));
+            ObjectNode feeds = o.putObject("district_feeds");
+            for (Map.Entry<String, List<String>> e : new java.util.TreeMap<>(s.districtFeeds()).entrySet()) feeds.set(e.getKey(), Json.strings(e.getValue()));
+            ArrayNode hz = o.putArray("hazards");
+            for (Hazard h : s.hazards()) hazardJson(hz, h);
+            ArrayNode cont = o.putArray("continuing");
+            for (Hazard h : s.continuing()) cont.add(h.key());
+            o.set("notices", Json.strings(s.notices()));
+            if (s.suggestion() != null) {
+                o.set("suggested_order", Json.strings(s.suggestion().order()));
+                ArrayNode fb = o.putArray("fallbacks");
+                for (Isolation.Fallback f : s.suggestion().fallbacks()) {
+                    ObjectNode fo = fb.addObject();
+                    fo.put("valve", f.valveId());
+                    fo.set("then_close", Json.strings(f.thenClose()));
+                    fo.put("adds_services", f.addedServices().size());
+                }
+            }
+        }
+        ArrayNode phases = root.putArray("phases");
+        for (PlanEvaluation.PhaseResult ph : r.phases()) {
+            ObjectNode o = phases.addObject();
+            o.put("phase", ph.index() + 1);
+            o.put("name", ph.phase().name());
+            if (ph.phase().start() != null) o.put("start", ph.phase().start().toString());
+            if (ph.phase().end() != null) o.put("end", ph.phase().end().toString());
+            o.put("customer_hours", Math.round(ph.customerHours() * 10) / 10.0);
+            o.put("services_off_at_end", ph.servicesOffAtEnd());
+        }
+        root.put("caution", Caution.TEXT);
+        return root;
+    }
+
+    static String stepsCsv(PlanEvaluation.Result r) {
+        List<List<String>> rows = new ArrayList<>();
+        for (PlanEvaluation.StepResult s : r.steps()) {
+            rows.add(List.of(Integer.toString(s.step().number()), Integer.toString(s.step().phase() + 1), s.step().describe(),
+                    Integer.toString(s.servicesOff()), Long.toString(s.metersOff()), Integer.toString(s.criticalOff().size()),
+                    hazardCodes(s.hazards())));
+        }
+        return Csv.format(List.of("step", "phase", "action", "services_off", "meters_off", "critical_off", "hazards"), rows);
+    }
+
+    static String hazardsCsv(PlanEvaluation.Result r) {
+        List<List<String>> rows = new ArrayList<>();
+        List<Hazard> all = new ArrayList<>(r.recordedHazards());
+        for (PlanEvaluation.StepResult s : r.steps()) all.addAll(s.hazards());
+        for (Hazard h : all) {
+            rows.add(List.of(Integer.toString(h.step()), h.code(), Words.word(h.severity()), String.join(" ", h.features()),
+                    Double.isNaN(h.x()) ? "" : String.format(Locale.ROOT, "%.2f", h.x()), Double.isNaN(h.y()) ? "" : String.format(Locale.ROOT, "%.2f", h.y()),
+                    h.message(), h.action()));
+        }
+        return Csv.format(List.of("step", "code", "severity", "features", "x", "y", "message", "action"), rows);
+    }
+}
