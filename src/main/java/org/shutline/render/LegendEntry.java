@@ -7,7 +7,8 @@ import org.shutline.model.NormalPosition;
 import org.shutline.model.Operability;
 
 /**
- * One symbol drawn on a map, as listed in its legend. Mains carry their system's rank
+ * One symbol drawn on a map, as listed in its legend, with a short label ("Main LP,
+ * proposed", "Valve closed, operable": the normal position and operability). Mains carry their system's rank
  * (0 = highest pressure, which picks colour and width) and status; valves their normal
  * position and operability; other kinds only a label. Fields a kind does not use are
  * null (rank -1). Entries sort in legend order ({@link #ORDER}).
@@ -35,17 +36,17 @@ public record LegendEntry(LegendKind kind, int rank, MainStatus status, NormalPo
             case PROPOSED -> "proposed";
             case ABANDONED -> "abandoned";
         };
-        return new LegendEntry(LegendKind.MAIN, rank, status, null, null, "Main, system " + systemId + ", " + word);
+        return new LegendEntry(LegendKind.MAIN, rank, status, null, null, "Main " + systemId + ", " + word);
     }
 
     public static LegendEntry valve(NormalPosition normal, Operability operable) {
-        String pos = normal == NormalPosition.CLOSED ? "normally closed" : "normally open";
+        String pos = normal == NormalPosition.CLOSED ? "closed" : "open";
         String op = switch (operable) {
             case YES -> "operable";
             case NO -> "inoperable";
-            case UNKNOWN -> "operability unknown";
+            case UNKNOWN -> "unknown";
         };
-        return new LegendEntry(LegendKind.VALVE, -1, null, normal, operable, "Valve, " + pos + ", " + op);
+        return new LegendEntry(LegendKind.VALVE, -1, null, normal, operable, "Valve " + pos + ", " + op);
     }
 
     public static LegendEntry simple(LegendKind kind, String label) {

@@ -78,8 +78,8 @@ public record MapStyle(String name, Color background, Color foreground, Color ha
 
     /** Abandoned main: thin and dotted. */
     public Stroke abandonedStroke() {
-        return new BasicStroke(1.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f,
-                new float[] {0.1f, 3.5f}, 0f);
+        return new BasicStroke(2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f,
+                new float[] {0.1f, 4f}, 0f);
     }
 
     public Stroke streetStroke() {

@@ -17,7 +17,8 @@ import org.shutline.model.Severity;
  * radius label at the top such as "r = 100 m" or "r = 330 ft" after the CRS unit),
  * valves to operate (circled order numbers offset up and right of the valve, with a
  * leader; filled for close, hollow for open; drawn in order so number 1 is on top of
- * none), and hazard markers (standing on their point, text to the right).
+ * none), and hazard markers (standing on their point, text to the right, or to the left where
+ * the right side has no room).
  */
 final class OverlayPainter implements LayerPainter {
     private static final double BADGE_OFFSET = 15;
@@ -105,7 +106,10 @@ final class OverlayPainter implements LayerPainter {
             if (x < -100 || x > v.width() + 20 || y < -20 || y > v.height() + 20) continue;
             Symbols.hazard(g, s, x, y, size, h.severity());
             if (!h.text().isEmpty()) {
-                Symbols.haloText(g, s, h.text(), (float) (x + size * 1.3), (float) (y + size * 0.4), s.foreground());
+                int tw = g.getFontMetrics().stringWidth(h.text());
+                double tx = x + size * 1.3;
+                if (tx + tw > v.width() && x - size * 1.3 - tw >= 0) tx = x - size * 1.3 - tw;
+                Symbols.haloText(g, s, h.text(), (float) tx, (float) (y + size * 0.4), s.foreground());
             }
             ctx.drew(h.severity() == Severity.CRITICAL
                     ? LegendEntry.simple(LegendKind.CRITICAL_HAZARD, "Hazard, critical")
