@@ -10,8 +10,8 @@ import java.util.Objects;
 /**
  * Paints a network map for a viewport into a {@link Graphics2D} whose transform maps
  * one unit to one pixel with the viewport's top-left corner at (0, 0): the background,
- * context layers, the US National Grid (when one is given), gas-off areas, mains,
- * services, sensing taps and control lines, valves, stations, sources, then the
+ * context layers, the US National Grid (when one is given), gas-off areas, control
+ * lines, mains, services, sensing taps, valves, stations, sources, then the
  * isolation circles, valves to operate and hazard markers. Drawing is clipped to the
  * viewport rectangle; each layer draws only what its spatial index returns for the
  * viewport envelope (grown by the symbol size).
@@ -85,6 +85,7 @@ public final class MapPainter {
         list.add(new ContextPainter());
         if (grid != null) list.add(grid::paint);
         list.add(new GasOffPainter(overlays.gasOff()));
+        list.add(new PointPainter(PointPainter.Layer.CONTROL_LINES));
         list.add(new MainPainter());
         list.add(new PointPainter(PointPainter.Layer.SERVICES));
         list.add(new PointPainter(PointPainter.Layer.TAPS));

@@ -13,12 +13,14 @@ import org.shutline.model.Valve;
 /**
  * Draws the point layers as {@link Symbols}: one painter per layer, chosen by
  * {@link Layer}. Services: ordinary ones only while the ground resolution is at most
- * {@link MapStyle#servicesMaxMetresPerPixel()}, critical customers always. Sensing taps
- * are joined to their station (when it is on the map) by a dashed control line.
+ * {@link MapStyle#servicesMaxMetresPerPixel()}, critical customers always. Control lines
+ * (a dashed straight line from a sensing tap to its station, when the station exists)
+ * are a layer of their own drawn under the mains, so a control line that runs along a
+ * main never makes that main look dashed; it shows where it leaves the pipe.
  */
 final class PointPainter implements LayerPainter {
     /** Which point layer a painter draws. */
-    enum Layer { SERVICES, TAPS, VALVES, STATIONS, SOURCES }
+    enum Layer { CONTROL_LINES, SERVICES, TAPS, VALVES, STATIONS, SOURCES }
 
     private final Layer layer;
 
@@ -29,6 +31,7 @@ final class PointPainter implements LayerPainter {
     @Override
     public void paint(Graphics2D g, PaintContext ctx) {
         switch (layer) {
+            case CONTROL_LINES -> controlLines(g, ctx);
             case SERVICES -> services(g, ctx);
             case TAPS -> taps(g, ctx);
             case VALVES -> valves(g, ctx);
@@ -54,26 +57,31 @@ final class PointPainter implements LayerPainter {
         }
     }
 
-    private static void taps(Graphics2D g, PaintContext ctx) {
+    private static void controlLines(Graphics2D g, PaintContext ctx) {
         MapStyle s = ctx.style();
         Viewport v = ctx.viewport();
         var pen = g.getColor();
         var stroke = g.getStroke();
+        g.setColor(s.tap());
+        g.setStroke(Symbols.controlLineStroke());
         for (SenseTap t : ctx.scene().tapsIn(ctx.query(s.symbolPx()))) {
-            double x = v.screenX(t.geometry().getX());
-            double y = v.screenY(t.geometry().getY());
             Station st = ctx.scene().station(t.stationId());
-            if (st != null) {
-                g.setColor(s.tap());
-                g.setStroke(Symbols.controlLineStroke());
-                g.draw(new Line2D.Double(v.screenX(st.geometry().getX()), v.screenY(st.geometry().getY()), x, y));
-                ctx.drew(LegendEntry.simple(LegendKind.CONTROL_LINE, "Sensing (control) line"));
-            }
-            Symbols.tap(g, s, x, y, s.symbolPx());
-            ctx.drew(LegendEntry.simple(LegendKind.SENSE_TAP, "Sensing tap"));
+            if (st == null) continue;
+            g.draw(new Line2D.Double(v.screenX(st.geometry().getX()), v.screenY(st.geometry().getY()),
+                    v.screenX(t.geometry().getX()), v.screenY(t.geometry().getY())));
+            ctx.drew(LegendEntry.simple(LegendKind.CONTROL_LINE, "Sensing (control) line"));
         }
         g.setColor(pen);
         g.setStroke(stroke);
+    }
+
+    private static void taps(Graphics2D g, PaintContext ctx) {
+        MapStyle s = ctx.style();
+        Viewport v = ctx.viewport();
+        for (SenseTap t : ctx.scene().tapsIn(ctx.query(s.symbolPx()))) {
+            Symbols.tap(g, s, v.screenX(t.geometry().getX()), v.screenY(t.geometry().getY()), s.symbolPx());
+            ctx.drew(LegendEntry.simple(LegendKind.SENSE_TAP, "Sensing tap"));
+        }
     }
 
     private static void valves(Graphics2D g, PaintContext ctx) {

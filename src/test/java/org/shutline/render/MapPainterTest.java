@@ -31,8 +31,11 @@ class MapPainterTest {
         BufferedImage img = paint(painter, RenderFixtures.view(), MapOverlays.NONE, null);
         // M1 (HP, active) runs along screen row 100 from x = 100 to 300; source and station symbols at the ends.
         for (int x = 120; x <= 285; x++) assertThat(rgb(img, x, 100)).as("M1 at x=%d", x).isEqualTo(rgb(S.systemColour(0)));
-        // M2 (LP, active) along row 100 from x = 300; the dashed control line shares row 99/100, row 101 is the main only.
-        for (int x = 312; x <= 340; x++) assertThat(rgb(img, x, 101)).as("M2 at x=%d", x).isEqualTo(rgb(S.systemColour(1)));
+        // M2 (LP, active) along row 100 from x = 300; the control line from ST to T1 runs beneath it, unseen.
+        for (int x = 312; x <= 340; x++) {
+            assertThat(rgb(img, x, 100)).as("M2 at x=%d", x).isEqualTo(rgb(S.systemColour(1)));
+            assertThat(rgb(img, x, 99)).as("M2 at x=%d", x).isEqualTo(rgb(S.systemColour(1)));
+        }
     }
 
     @Test
