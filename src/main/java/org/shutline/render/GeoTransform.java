@@ -1,7 +1,9 @@
 package org.shutline.render;
 
 import java.awt.geom.Point2D;
+import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
 import org.locationtech.proj4j.CoordinateReferenceSystem;
 import org.shutline.model.CrsInfo;
 
@@ -15,6 +17,7 @@ public final class GeoTransform {
     private final CrsInfo crs;
     private final CoordinateReferenceSystem networkCrs;
     private final Reprojection lonLat;
+    private final Map<Integer, Reprojection> utmCache = new ConcurrentHashMap<>();
 
     private GeoTransform(CrsInfo crs, CoordinateReferenceSystem networkCrs) {
         this.crs = crs;
@@ -55,8 +58,9 @@ public final class GeoTransform {
         return GridReference.of(ll.getX(), ll.getY());
     }
 
-    /** Network CRS to WGS84 / UTM of the given zone, and back. */
+    /** Network CRS to WGS84 / UTM of the given zone, and back; built once per zone and hemisphere. */
     Reprojection utm(int zone, boolean south) {
-        return new Reprojection(networkCrs, Reprojection.utm(zone, south));
+        return utmCache.computeIfAbsent(south ? -zone : zone,
+                z -> new Reprojection(networkCrs, Reprojection.utm(zone, south)));
     }
 }

@@ -58,7 +58,9 @@ public final class MapScene {
         this.context = List.copyOf(ctx);
         this.systemRank = rankSystems(network.mains());
         Map<String, Station> byId = new HashMap<>();
-        for (Station s : network.stations()) byId.putIfAbsent(s.id(), s);
+        for (Station s : network.stations()) {
+            if (s.geometry() != null && !s.geometry().isEmpty()) byId.putIfAbsent(s.id(), s);
+        }
         this.stationById = byId;
     }
 
@@ -87,6 +89,7 @@ public final class MapScene {
         return List.of(ids);
     }
 
+    /** The first station with this id that has a location; null when there is none. */
     public Station station(String id) {
         return stationById.get(id);
     }

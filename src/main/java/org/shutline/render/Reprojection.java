@@ -10,8 +10,9 @@ import org.shutline.model.CrsInfo;
 
 /**
  * A pair of proj4j transforms between two coordinate reference systems, forward and
- * back. proj4j transforms keep scratch state, so both directions are synchronized;
- * x is always easting or longitude. A failed point transform gives NaN coordinates.
+ * back. proj4j transforms keep scratch state, so both directions are synchronized,
+ * and CRS parsing goes through one lock as well (proj4j's factory and registry are
+ * not documented as thread-safe); x is always easting or longitude. A failed point transform gives NaN coordinates.
  */
 final class Reprojection {
     private static final CRSFactory CRS_FACTORY = new CRSFactory();
@@ -21,12 +22,14 @@ final class Reprojection {
     private final CoordinateTransform back;
 
     Reprojection(CoordinateReferenceSystem from, CoordinateReferenceSystem to) {
-        this.forward = TX_FACTORY.createTransform(from, to);
-        this.back = TX_FACTORY.createTransform(to, from);
+        synchronized (Reprojection.class) {
+            this.forward = TX_FACTORY.createTransform(from, to);
+            this.back = TX_FACTORY.createTransform(to, from);
+        }
     }
 
     /** The proj4j CRS of a network CRS: by EPSG code when known, else by its proj4 definition; null when neither. */
-    static CoordinateReferenceSystem crsOf(CrsInfo crs) {
+    static synchronized CoordinateReferenceSystem crsOf(CrsInfo crs) {
         try {
             if (crs.epsg() > 0) return CRS_FACTORY.createFromName("EPSG:" + crs.epsg());
             if (crs.proj4() != null && !crs.proj4().isBlank()) {
@@ -39,12 +42,12 @@ final class Reprojection {
         }
     }
 
-    static CoordinateReferenceSystem wgs84() {
+    static synchronized CoordinateReferenceSystem wgs84() {
         return CRS_FACTORY.createFromParameters("WGS84", "+proj=longlat +datum=WGS84 +no_defs");
     }
 
     /** WGS84 / UTM zone {@code zone}, north or south. */
-    static CoordinateReferenceSystem utm(int zone, boolean south) {
+    static synchronized CoordinateReferenceSystem utm(int zone, boolean south) {
         return CRS_FACTORY.createFromParameters("UTM" + zone + (south ? "S" : "N"),
                 "+proj=utm +zone=" + zone + (south ? " +south" : "") + " +datum=WGS84 +units=m +no_defs");
     }

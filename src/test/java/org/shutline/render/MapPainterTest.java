@@ -85,6 +85,21 @@ class MapPainterTest {
     }
 
     @Test
+    void controlLineRunsFromTheTapToItsStation() {
+        // A tap 80 m north of the station (relative (200, 180), screen (300, 20)): the control line is vertical
+        // at x = 300 from y = 100 up to y = 20, dashed 2 px on, 2 px off.
+        var town = RenderFixtures.town();
+        var net = new org.shutline.model.Network(town.sourceName(), town.crs(), town.mains(), town.valves(),
+                town.stations(), List.of(new org.shutline.model.SenseTap("T2", "ST", org.shutline.model.TapDevice.WORKER,
+                        RenderFixtures.pt(200, 180))), town.services(), town.sources(), town.context(), List.of());
+        BufferedImage img = paint(new MapPainter(new MapScene(net), S).withAntialias(false), RenderFixtures.view(),
+                MapOverlays.NONE, null);
+        int dashes = count(img, S.tap(), 299, 35, 301, 85);
+        assertThat(dashes).isBetween(20, 40);
+        assertThat(count(img, S.tap(), 310, 35, 400, 85)).isZero();
+    }
+
+    @Test
     void nothingIsDrawnWhereNothingIs() {
         BufferedImage img = paint(painter, RenderFixtures.view(), MapOverlays.NONE, null);
         // Below the abandoned main (relative y < -120) and right of the network (x > 410) the map is empty.
