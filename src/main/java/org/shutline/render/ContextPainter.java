@@ -19,7 +19,7 @@ import org.shutline.model.ContextLayer;
 
 /**
  * Draws the context layers under the network: lines (streets) wide and grey, polygons
- * (buildings, parcels) as thin outlines, in layer order. While the ground resolution is
+ * (buildings, parcels) as thin outlines, in layer order; context points are not drawn. While the ground resolution is
  * at most {@link MapStyle#labelsMaxMetresPerPixel()}, a line whose item has a
  * {@code name} attribute (any case) is labelled along its longest on-screen segment,
  * upright, when the text fits the segment and does not overlap a label already placed.

@@ -68,8 +68,8 @@ public record Viewport(double centerX, double centerY, double scale, int width, 
     }
 
     /**
-     * The viewport of the same pixel size centred on {@code env} at the smallest scale
-     * showing all of it inside a margin of {@code marginPx} pixels. A null or empty
+     * The viewport of the same pixel size centred on {@code env} at the fewest CRS units
+     * per pixel that still show all of it inside a margin of {@code marginPx} pixels. A null or empty
      * envelope returns this viewport; a point (zero-size envelope) keeps the scale and
      * centres on it. When the margin leaves less than one pixel it is ignored.
      */
