@@ -1,6 +1,7 @@
 package org.shutline.render;
 
 import java.awt.BasicStroke;
+import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.Shape;
@@ -70,7 +71,7 @@ final class ContextPainter implements LayerPainter {
     private static void placeLabels(Graphics2D g, PaintContext ctx, List<Labelled> labels) {
         MapStyle s = ctx.style();
         var font = g.getFont();
-        g.setFont(s.font().deriveFont(java.awt.Font.ITALIC));
+        g.setFont(s.font().deriveFont(Font.ITALIC));
         FontMetrics fm = g.getFontMetrics();
         List<Shape> placed = new ArrayList<>();
         Viewport v = ctx.viewport();

@@ -1,10 +1,14 @@
 package org.shutline.render;
 
+import java.awt.BasicStroke;
+import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
+import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
+import org.shutline.model.Severity;
 
 /**
  * A legend of the symbols actually drawn (the entries returned by
@@ -19,7 +23,7 @@ public final class Legend {
     public static int paint(Graphics2D g, Rectangle2D box, List<LegendEntry> entries, MapStyle s) {
         var pen = g.getColor();
         var font = g.getFont();
-        g.setFont(s.font().deriveFont(java.awt.Font.BOLD));
+        g.setFont(s.font().deriveFont(Font.BOLD));
         FontMetrics fm = g.getFontMetrics();
         g.setColor(s.foreground());
         g.drawString("Legend", (float) box.getX() + 2, (float) box.getY() + fm.getAscent());
@@ -92,23 +96,23 @@ public final class Legend {
                 g.setPaint(GasOffPainter.hatch(s.gasOff()));
                 g.fill(box);
                 g.setPaint(s.gasOff());
-                g.setStroke(new java.awt.BasicStroke(2f));
+                g.setStroke(new BasicStroke(2f));
                 g.draw(box);
             }
             case VALVE_TO_CLOSE -> Symbols.operateBadge(g, s, cx, cy, 1, true);
             case VALVE_TO_OPEN -> Symbols.operateBadge(g, s, cx, cy, 1, false);
-            case HAZARD -> Symbols.hazard(g, s, cx, cy, s.symbolPx() * 0.9, org.shutline.model.Severity.WARNING);
-            case CRITICAL_HAZARD -> Symbols.hazard(g, s, cx, cy, s.symbolPx() * 0.9, org.shutline.model.Severity.CRITICAL);
+            case HAZARD -> Symbols.hazard(g, s, cx, cy, s.symbolPx() * 0.9, Severity.WARNING);
+            case CRITICAL_HAZARD -> Symbols.hazard(g, s, cx, cy, s.symbolPx() * 0.9, Severity.CRITICAL);
             case ISOLATION_CIRCLE -> {
                 g.setColor(s.isolation());
-                g.setStroke(new java.awt.BasicStroke(2f, java.awt.BasicStroke.CAP_BUTT, java.awt.BasicStroke.JOIN_ROUND,
+                g.setStroke(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND,
                         10f, new float[] {5f, 3f}, 0f));
                 double rr = Math.min(r.getWidth(), r.getHeight()) / 2 - 2;
-                g.draw(new java.awt.geom.Ellipse2D.Double(cx - rr, cy - rr, 2 * rr, 2 * rr));
+                g.draw(new Ellipse2D.Double(cx - rr, cy - rr, 2 * rr, 2 * rr));
             }
             case GRID -> {
                 g.setColor(s.grid());
-                g.setStroke(new java.awt.BasicStroke(1f));
+                g.setStroke(new BasicStroke(1f));
                 g.draw(line);
                 g.draw(new Line2D.Double(cx, r.getY() + 2, cx, r.getMaxY() - 2));
             }

@@ -1,5 +1,6 @@
 package org.shutline.render;
 
+import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.geom.AffineTransform;
@@ -34,7 +35,7 @@ public final class NorthArrow {
         var stroke = g.getStroke();
         var font = g.getFont();
         AffineTransform old = g.getTransform();
-        g.setFont(s.font().deriveFont(java.awt.Font.BOLD));
+        g.setFont(s.font().deriveFont(Font.BOLD));
         FontMetrics fm = g.getFontMetrics();
         double size = Math.min(box.getWidth(), box.getHeight() - fm.getHeight());
         double h = Math.max(8, size) / 2.0;

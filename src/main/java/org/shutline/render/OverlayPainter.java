@@ -1,6 +1,7 @@
 package org.shutline.render;
 
 import java.awt.BasicStroke;
+import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.geom.Ellipse2D;
@@ -44,7 +45,7 @@ final class OverlayPainter implements LayerPainter {
     private void rings(Graphics2D g, PaintContext ctx) {
         MapStyle s = ctx.style();
         Viewport v = ctx.viewport();
-        g.setFont(s.font().deriveFont(java.awt.Font.BOLD));
+        g.setFont(s.font().deriveFont(Font.BOLD));
         FontMetrics fm = g.getFontMetrics();
         for (IsolationRing r : overlays.rings()) {
             double radius = ctx.unit().fromMetres(r.radiusMetres()) / v.scale();
@@ -98,7 +99,7 @@ final class OverlayPainter implements LayerPainter {
     private void hazards(Graphics2D g, PaintContext ctx) {
         MapStyle s = ctx.style();
         Viewport v = ctx.viewport();
-        g.setFont(s.font().deriveFont(java.awt.Font.BOLD));
+        g.setFont(s.font().deriveFont(Font.BOLD));
         double size = s.symbolPx() * 1.2;
         for (HazardMark h : overlays.hazards()) {
             double x = v.screenX(h.x());
