@@ -275,6 +275,20 @@ class BadInputTest {
     }
 
     @Test
+    void emptyAndRepeatedIdsAreErrorsAndTheFeatureIsSkipped() throws Exception {
+        Path shp = shapesOf("mains", TestNetworks.collection(
+                TestNetworks.feature(TestNetworks.line(0, 0, 10, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\""),
+                TestNetworks.feature(TestNetworks.line(10, 0, 20, 0), "\"main_id\":\" \",\"system_id\":\"LP1\""),
+                TestNetworks.feature(TestNetworks.line(20, 0, 30, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\"")));
+        Network n = readOk(shp);
+        assertThat(n.mains()).singleElement().satisfies(m -> assertThat(m.geometry().getCoordinate().x).isEqualTo(TestNetworks.X0));
+        assertThat(withCode(n, "missing-id")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("layer mains", "record 2", "main_id"));
+        assertThat(withCode(n, "duplicate-id")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("M1", "record 3"));
+    }
+
+    @Test
     void emptyGeometryIsSkipped() throws Exception {
         Path json = TestNetworks.write(dir.resolve("json"), "mains", TestNetworks.collection(
                 TestNetworks.feature(TestNetworks.line(0, 0, 10, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\""),
