@@ -1,17 +1,195 @@
 package org.shutline.io;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.math.BigDecimal;
+import org.locationtech.jts.geom.Point;
+import org.shutline.model.ContextLayer;
+import org.shutline.model.Finding;
+import org.shutline.model.Findings;
+import org.shutline.model.Main;
+import org.shutline.model.MainStatus;
 import org.shutline.model.Network;
+import org.shutline.model.NormalPosition;
+import org.shutline.model.Operability;
+import org.shutline.model.SenseTap;
+import org.shutline.model.Service;
+import org.shutline.model.ServiceClass;
+import org.shutline.model.Severity;
+import org.shutline.model.Source;
+import org.shutline.model.Station;
+import org.shutline.model.TapDevice;
+import org.shutline.model.Valve;
+import org.shutline.model.ValveKind;
 
 /**
  * Reads a network from one GeoPackage ({@code .gpkg}) or one folder of shapefiles.
- * (Placeholder: the reader work fills this in.)
+ *
+ * <p>A path whose name ends {@code .gpkg} (any case) is read as a GeoPackage, a
+ * folder as shapefiles; anything else is an {@link InputException}. Our layers
+ * (mains, valves, stations, sense_taps, services, sources) are found by their
+ * mapped names ignoring case; only {@code mains} is required. Every other layer is
+ * a {@link ContextLayer} by its own name. All layers end in one projected CRS
+ * ({@link CrsResolver}); fields, defaults and findings follow {@link LayerDecoder}
+ * and docs/input-data.md. Input files are only read, never opened for writing.
  */
 public final class NetworkReader {
     private NetworkReader() {}
 
     /** Read the network at {@code path} with the given mapping ({@link FieldMapping#DEFAULT} for none). */
     public static Network read(Path path, FieldMapping mapping) throws InputException {
-        throw new UnsupportedOperationException("not yet built");
+        List<RawLayer> layers;
+        if (path.getFileName() != null && path.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".gpkg")) {
+            if (!Files.isRegularFile(path)) throw new InputException(path + ": no such GeoPackage file");
+            layers = GeoPackageSource.read(path);
+        } else if (Files.isDirectory(path)) {
+            layers = ShapefileSource.read(path);
+        } else {
+            throw new InputException(path + ": neither a .gpkg file nor a folder of shapefiles");
+        }
+        return build(path, layers, mapping);
+    }
+
+    private static Network build(Path path, List<RawLayer> all, FieldMapping mapping) throws InputException {
+        Findings findings = new Findings();
+        List<RawLayer> rest = new ArrayList<>(all);
+        String mainsName = mapping.layerName("mains");
+        RawLayer mains = take(rest, mainsName);
+        if (mains == null) {
+            List<String> names = new ArrayList<>();
+            for (RawLayer l : all) names.add(l.name());
+            throw new InputException(path + ": no mains layer (looked for '" + mainsName + "'); layers found: "
+                    + (names.isEmpty() ? "none" : String.join(", ", names)));
+        }
+        CrsResolver crs = new CrsResolver(path.toString());
+        Map<String, List<LayerDecoder.Row>> rows = new LinkedHashMap<>();
+        rows.put("mains", LayerDecoder.decode(Schema.MAINS, crs.start(mains, findings), mapping, findings));
+        for (Schema.Layer l : Schema.LAYERS) {
+            if (l == Schema.MAINS) continue;
+            RawLayer raw = take(rest, mapping.layerName(l.name()));
+            rows.put(l.name(), raw == null ? List.of()
+                    : LayerDecoder.decode(l, crs.adopt(raw, l.name(), findings), mapping, findings));
+        }
+        List<ContextLayer> context = new ArrayList<>();
+        for (RawLayer l : rest) context.add(context(crs.adopt(l, l.name(), findings), findings));
+        String name = path.getFileName() == null ? path.toString() : path.getFileName().toString();
+        return new Network(name, crs.target(), mainsOf(rows.get("mains")), valves(rows.get("valves")),
+                stations(rows.get("stations")), taps(rows.get("sense_taps")), services(rows.get("services")),
+                sources(rows.get("sources")), context, findings.list());
+    }
+
+    /** Removes and returns the layer with this name (ignoring case), or null. */
+    private static RawLayer take(List<RawLayer> layers, String name) {
+        for (int i = 0; i < layers.size(); i++) {
+            if (layers.get(i).name().equalsIgnoreCase(name)) return layers.remove(i);
+        }
+        return null;
+    }
+
+    private static List<Main> mainsOf(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.MAINS;
+        List<Main> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            Integer yr = r.get(s, "install_yr");
+            out.add(new Main(r.id(), r.get(s, "system_id"), (MainStatus) r.get(s, "status"), r.get(s, "material"),
+                    r.get(s, "diam_mm"), r.get(s, "maop_kpa"), yr, r.geometry()));
+        }
+        return out;
+    }
+
+    private static List<Valve> valves(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.VALVES;
+        List<Valve> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            LocalDate checked = r.get(s, "checked");
+            out.add(new Valve(r.id(), r.get(s, "system_id"), (ValveKind) r.get(s, "kind"),
+                    (NormalPosition) r.get(s, "normal"), (Operability) r.get(s, "operable"), checked, (Point) r.geometry()));
+        }
+        return out;
+    }
+
+    private static List<Station> stations(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.STATIONS;
+        List<Station> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            out.add(new Station(r.id(), r.get(s, "in_sys"), r.get(s, "out_sys"), r.get(s, "set_kpa"),
+                    r.get(s, "monitor_kpa"), r.get(s, "relief_kpa"), r.get(s, "name"), (Point) r.geometry()));
+        }
+        return out;
+    }
+
+    private static List<SenseTap> taps(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.SENSE_TAPS;
+        List<SenseTap> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            out.add(new SenseTap(r.id(), r.get(s, "station_id"), (TapDevice) r.get(s, "device"), (Point) r.geometry()));
+        }
+        return out;
+    }
+
+    private static List<Service> services(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.SERVICES;
+        List<Service> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            Integer meters = r.get(s, "meters");
+            out.add(new Service(r.id(), r.get(s, "system_id"), (ServiceClass) r.get(s, "class"),
+                    meters == null ? 1 : meters, r.get(s, "critical"), r.get(s, "main_id"), r.get(s, "address"),
+                    (Point) r.geometry()));
+        }
+        return out;
+    }
+
+    private static List<Source> sources(List<LayerDecoder.Row> rows) {
+        Schema.Layer s = Schema.SOURCES;
+        List<Source> out = new ArrayList<>(rows.size());
+        for (LayerDecoder.Row r : rows) {
+            out.add(new Source(r.id(), r.get(s, "system_id"), r.get(s, "kpa"), (Point) r.geometry()));
+        }
+        return out;
+    }
+
+    /** A context layer: every feature with a geometry, attributes by field name (numbers as Long or Double). */
+    private static ContextLayer context(RawLayer l, Findings findings) {
+        List<ContextLayer.Item> items = new ArrayList<>(l.features().size());
+        int skipped = 0;
+        for (RawLayer.Feature f : l.features()) {
+            if (f.geometry() == null || LayerDecoder.invalid(f.geometry()) != null) {
+                skipped++;
+                continue;
+            }
+            Map<String, Object> attrs = new LinkedHashMap<>();
+            for (int i = 0; i < l.fields().size(); i++) attrs.put(l.fields().get(i), plain(f.values().get(i)));
+            items.add(new ContextLayer.Item(f.geometry(), Collections.unmodifiableMap(attrs)));
+        }
+        if (skipped > 0) {
+            findings.add(Finding.of("empty-geometry", Severity.WARNING, l.name(), "context layer " + l.name() + ": "
+                    + skipped + " feature(s) without a usable geometry left out"));
+        }
+        if (l.features().isEmpty()) {
+            findings.add(Finding.of("empty-layer", Severity.WARNING, l.name(), "layer " + l.name() + " has no features"));
+        }
+        return new ContextLayer(l.name(), items);
+    }
+
+    private static Object plain(Object v) {
+        if (v instanceof BigDecimal b) {
+            BigDecimal s = b.stripTrailingZeros();
+            if (s.scale() <= 0 && s.abs().compareTo(BigDecimal.valueOf(Long.MAX_VALUE)) < 0) return s.longValueExact();
+            return b.doubleValue();
+        }
+        if (v instanceof Integer i) return i.longValue();
+        if (v instanceof Float f) return f.doubleValue();
+        if (v instanceof String s) return s.trim().isEmpty() ? null : s.trim();
+        if (v instanceof java.util.Date d && !(v instanceof java.sql.Timestamp)) {
+            return d.toInstant().atZone(java.time.ZoneId.systemDefault()).toLocalDate();
+        }
+        return v;
     }
 }
