@@ -55,7 +55,7 @@ class FindingCodesTest {
     void nearMissOnItsOwnLine() {
         Topology t = new TestNet().main("H", "LP", "LINESTRING (0 0, 20 0, 20 10, 10 10, 10 2)").build();
         Finding f = only(t, FindingCodes.NEAR_MISS);
-        assertThat(f.features()).containsExactly("H", "H");
+        assertThat(f.features()).containsExactly("H");
         assertThat(f.y()).isEqualTo(2.0);
     }
 
