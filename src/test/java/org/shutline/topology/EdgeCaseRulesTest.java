@@ -122,4 +122,30 @@ class EdgeCaseRulesTest {
         assertThatThrownBy(() -> NetworkBuilder.build(n.network(), Tolerances.DEFAULT, cancelled))
                 .isInstanceOf(CancellationException.class);
     }
+
+    /*
+     *             B (10,10)
+     *               |  end (10,0.2)
+     *  A (0,0)------+-+------(20,0)   B and C ends are 0.41 apart (joined); they tee into A at
+     *                 |  end (10.1,-0.2)   measures 10 and 10.1: one junction, the 0.1 m piece
+     *             C (10.1,-10)             between is a loop edge on it
+     */
+    @Test
+    void closeTeesOfOneJunctionLeaveALoopPiece() {
+        Topology t = new TestNet()
+                .main("A", "LP", "LINESTRING (0 0, 20 0)")
+                .main("B", "LP", "LINESTRING (10 0.2, 10 10)")
+                .main("C", "LP", "LINESTRING (10.1 -0.2, 10.1 -10)").build();
+        Graph g = t.graph();
+        int[] a = pipes(g, 0);
+        assertThat(a).hasSize(3);
+        int j = g.edgeTo(a[0]);
+        assertThat(g.edgeFrom(a[1])).isEqualTo(j);
+        assertThat(g.edgeTo(a[1])).isEqualTo(j);
+        assertThat(g.edgeM1(a[1]) - g.edgeM0(a[1])).isCloseTo(0.1, org.assertj.core.data.Offset.offset(1e-9));
+        assertThat(g.edgeFrom(a[2])).isEqualTo(j);
+        assertThat(g.edgeFrom(pipes(g, 1)[0])).isEqualTo(j);
+        assertThat(g.edgeFrom(pipes(g, 2)[0])).isEqualTo(j);
+        assertThat(g.nodeCount()).isEqualTo(5);
+    }
 }
