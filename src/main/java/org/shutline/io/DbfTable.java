@@ -62,11 +62,15 @@ final class DbfTable {
         for (int i = 0; i < count; i++) if (bytes[headerLen + i * recLen] == '*') deleted.set(i);
         try (DBFReader r = new DBFReader(new ByteArrayInputStream(bytes), cs, true)) {
             if (r.getRecordCount() != count) throw new InputException(dbf + ": corrupt header (record count)");
-            for (int i = 0; i < r.getFieldCount(); i++) names.add(r.getField(i).getName());
+            // with showDeletedRows javadbf puts a pseudo-field "deleted" first; the descriptors in the file decide
+            int skip = r.getFieldCount() - descriptors(bytes);
+            if (skip < 0 || skip > 1) throw new InputException(dbf + ": corrupt header (field descriptors)");
+            for (int i = skip; i < r.getFieldCount(); i++) names.add(r.getField(i).getName());
             for (rec = 1; rec <= count; rec++) {
                 Object[] row = r.nextRecord();
                 if (row == null) throw new InputException(dbf + ": truncated: record " + rec + " of " + count + " missing");
-                rows.add(dates(Arrays.copyOf(row, row.length)));
+                if (row.length != names.size() + skip) throw new InputException(dbf + ": corrupt record " + rec);
+                rows.add(dates(Arrays.copyOfRange(row, skip, row.length)));
             }
         } catch (DBFException e) {
             throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": " + e.getMessage(), e);
@@ -90,6 +94,13 @@ final class DbfTable {
     }
 
     /** Returns the record count after checking the header against the file size. */
+    /** Number of 32-byte field descriptors before the 0x0D terminator (the header was checked). */
+    private static int descriptors(byte[] b) {
+        int n = 0;
+        for (int at = 32; at < b.length && b[at] != 0x0D; at += 32) n++;
+        return n;
+    }
+
     private static int checkHeader(byte[] b, Path dbf) throws InputException {
         if (b.length < 33) throw new InputException(dbf + ": truncated: " + b.length + " bytes is shorter than a dBASE header");
         int version = b[0] & 0x07;

@@ -82,7 +82,9 @@ public final class FieldMapping {
     public static FieldMapping load(Path file) throws InputException {
         JsonNode root;
         try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(Files.readAllBytes(file));
+            ObjectMapper yaml = new ObjectMapper(new YAMLFactory());
+            yaml.enable(com.fasterxml.jackson.core.JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+            root = yaml.readTree(Files.readAllBytes(file));
         } catch (JacksonException e) {
             throw new InputException(file + ": not a readable YAML mapping file: " + e.getOriginalMessage());
         } catch (IOException e) {

@@ -5,6 +5,8 @@ import java.time.LocalDate;
 import java.time.ZoneId;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -57,11 +59,15 @@ final class LayerDecoder {
     private final int[] column;
 
     /** One decoded feature: its geometry and typed values indexed like the schema's fields. */
-    record Row(String id, Geometry geometry, Object[] values) {
+    record Row(String id, Geometry geometry, List<Object> values) {
+        Row {
+            values = Collections.unmodifiableList(Arrays.asList(values.toArray()));
+        }
+
         @SuppressWarnings("unchecked")
         <T> T get(Schema.Layer l, String field) {
             for (int i = 0; i < l.fields().size(); i++) {
-                if (l.fields().get(i).name().equals(field)) return (T) values[i];
+                if (l.fields().get(i).name().equals(field)) return (T) values.get(i);
             }
             throw new IllegalArgumentException("no field " + field + " in layer " + l.name());
         }
@@ -138,7 +144,7 @@ final class LayerDecoder {
                 Schema.Field field = layer.fields().get(i);
                 vals[i] = value(field, column[i] < 0 ? null : f.values().get(column[i]), at, id, c);
             }
-            out.add(new Row(id, f.geometry(), vals));
+            out.add(new Row(id, f.geometry(), Arrays.asList(vals)));
         }
         return out;
     }

@@ -49,9 +49,12 @@ final class EndChecks {
                 if (near >= 0) {
                     String other = mains.get(lines.main(near)).id();
                     String what = near == l ? "its own main " + other : "main " + other;
-                    out.add(Finding.at(FindingCodes.NEAR_MISS, Severity.WARNING, FindingCodes.MAINS, x, y,
-                            "An end of main " + id + " joins nothing but lies within the near-miss distance of "
-                                    + what + "; check whether they should meet.", id, other));
+                    String msg = "An end of main " + id + " joins nothing but lies within the near-miss distance of "
+                            + what + "; check whether they should meet.";
+                    out.add(near == l || other.equals(id)
+                            ? Finding.at(FindingCodes.NEAR_MISS, Severity.WARNING, FindingCodes.MAINS, x, y, msg, id)
+                            : Finding.at(FindingCodes.NEAR_MISS, Severity.WARNING, FindingCodes.MAINS, x, y, msg, id,
+                                    other));
                 }
                 if (!featureAt(pa, feat, featStart[l], featStart[l + 1], x, y, tol.pointM())) {
                     out.add(Finding.at(FindingCodes.DANGLING_END, Severity.NOTE, FindingCodes.MAINS, x, y,

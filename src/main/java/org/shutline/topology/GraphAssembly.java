@@ -74,9 +74,9 @@ final class GraphAssembly {
         return pa.cutType[c - ej.endElements - ej.teeCount];
     }
 
-    /** Union-find element of a junction cut. */
-    private int elemOf(int c) {
-        return c < ej.endElements ? c : ej.endElements + (c - ej.endElements);
+    /** Union-find element of a junction cut: cut numbers of ends and tees are their element numbers. */
+    private static int elemOf(int c) {
+        return c;
     }
 
     private int refOf(int c) {

@@ -45,8 +45,7 @@ public final class NetworkBuilder {
         ej.run(progress);
 
         PointAttach pa = new PointAttach(network, in, new NearestMain(in.lines, in, network.mains()), tol, findings);
-        pa.run();
-        progress.checkCancelled();
+        pa.run(progress);
 
         GraphAssembly ga = new GraphAssembly(in.lines, in, ej, pa, network.valves().size(),
                 network.stations().size(), network.sources().size(), network.services().size(),

@@ -7,6 +7,7 @@ import org.shutline.model.Finding;
 import org.shutline.model.Findings;
 import org.shutline.model.Main;
 import org.shutline.model.Network;
+import org.shutline.model.Progress;
 import org.shutline.model.SenseTap;
 import org.shutline.model.Service;
 import org.shutline.model.Severity;
@@ -61,6 +62,8 @@ final class PointAttach {
     private final Tolerances tol;
     private final Findings out;
     private final Hit hit = new Hit();
+    private Progress progress = Progress.NONE;
+    private long ticks;
 
     PointAttach(Network net, InputCheck in, NearestMain near, Tolerances tol, Findings out) {
         this.net = net;
@@ -83,12 +86,25 @@ final class PointAttach {
         return a;
     }
 
-    void run() {
+    void run(Progress p) {
+        progress = p;
+        long total = (long) net.valves().size() + net.stations().size() + net.sources().size()
+                + net.taps().size() + net.services().size();
+        progress.begin("Attaching valves, stations, taps and services", total);
         valves();
         stations();
         sources();
         taps();
         services();
+        progress.done(total);
+    }
+
+    /** Counts one feature; every 4096 reports progress and checks cancellation. */
+    private void tick() {
+        if ((++ticks & 4095) == 0) {
+            progress.checkCancelled();
+            progress.done(ticks);
+        }
     }
 
     private int systemOf(String sysId, String layer, String featureId, Point p) {
@@ -105,6 +121,7 @@ final class PointAttach {
     private void valves() {
         List<Valve> vs = net.valves();
         for (int i = 0; i < vs.size(); i++) {
+            tick();
             if (!in.valveOk[i]) continue;
             Valve v = vs.get(i);
             Point p = v.geometry();
@@ -124,6 +141,7 @@ final class PointAttach {
     private void stations() {
         List<Station> ss = net.stations();
         for (int i = 0; i < ss.size(); i++) {
+            tick();
             if (!in.stationOk[i]) continue;
             Station st = ss.get(i);
             Point p = st.geometry();
@@ -156,6 +174,7 @@ final class PointAttach {
     private void sources() {
         List<Source> ss = net.sources();
         for (int i = 0; i < ss.size(); i++) {
+            tick();
             if (!in.sourceOk[i]) continue;
             Source s = ss.get(i);
             Point p = s.geometry();
@@ -175,6 +194,7 @@ final class PointAttach {
     private void taps() {
         List<SenseTap> ts = net.taps();
         for (int i = 0; i < ts.size(); i++) {
+            tick();
             if (!in.tapOk[i]) continue;
             SenseTap t = ts.get(i);
             Point p = t.geometry();
@@ -204,6 +224,7 @@ final class PointAttach {
         List<Service> ss = net.services();
         List<Main> mains = net.mains();
         for (int i = 0; i < ss.size(); i++) {
+            tick();
             if (!in.serviceOk[i]) continue;
             Service s = ss.get(i);
             Point p = s.geometry();

@@ -103,6 +103,21 @@ class BadInputTest {
     }
 
     @Test
+    void textStoredInAGeoPackageRealColumnIsABadValue() throws Exception {
+        Path json = TestNetworks.write(dir.resolve("json"), "mains", TestNetworks.mains());
+        Path gpkg = Gdal.toGpkg(dir.resolve("town.gpkg"), List.of(json));
+        // SQLite keeps text in a REAL column (dynamic typing); written with GDAL's ogrinfo running native SQL
+        Gdal.run(null, "ogrinfo", gpkg.toString(), "-sql", "UPDATE mains SET diam_mm = 'wide' WHERE main_id = 'M2'");
+        assertThat(Gdal.run(null, "ogrinfo", "-ro", gpkg.toString(), "-sql", "SELECT typeof(diam_mm) AS t FROM mains WHERE main_id = 'M2'"))
+                .contains("t (String) = text");
+        Network n = readOk(gpkg);
+        assertThat(n.mains().get(1).diamMm()).isNull();
+        assertThat(n.mains().get(0).diamMm()).isEqualTo(114.3);
+        assertThat(withCode(n, "bad-value")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("layer mains", "M2", "fid 2", "diam_mm", "wide"));
+    }
+
+    @Test
     void unknownWordIsAnErrorAndTheDefault() throws Exception {
         Path shp = shapesOf("mains", TestNetworks.collection(TestNetworks.feature(TestNetworks.line(0, 0, 10, 0),
                 "\"main_id\":\"M7\",\"system_id\":\"LP1\",\"status\":\"retired\"")));
@@ -257,6 +272,20 @@ class BadInputTest {
         assertThat(n.mains()).extracting(m -> m.id()).containsExactly("M1", "M3", "M4");
         // GDAL ogrinfo skips deleted records when it iterates (its -so "Feature Count" is the .shx count, 4)
         assertThat(Gdal.iteratedCount(shp.resolve("mains.shp"), "mains")).isEqualTo(3);
+    }
+
+    @Test
+    void emptyAndRepeatedIdsAreErrorsAndTheFeatureIsSkipped() throws Exception {
+        Path shp = shapesOf("mains", TestNetworks.collection(
+                TestNetworks.feature(TestNetworks.line(0, 0, 10, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\""),
+                TestNetworks.feature(TestNetworks.line(10, 0, 20, 0), "\"main_id\":\" \",\"system_id\":\"LP1\""),
+                TestNetworks.feature(TestNetworks.line(20, 0, 30, 0), "\"main_id\":\"M1\",\"system_id\":\"LP1\"")));
+        Network n = readOk(shp);
+        assertThat(n.mains()).singleElement().satisfies(m -> assertThat(m.geometry().getCoordinate().x).isEqualTo(TestNetworks.X0));
+        assertThat(withCode(n, "missing-id")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("layer mains", "record 2", "main_id"));
+        assertThat(withCode(n, "duplicate-id")).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("M1", "record 3"));
     }
 
     @Test

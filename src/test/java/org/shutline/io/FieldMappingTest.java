@@ -65,6 +65,13 @@ class FieldMappingTest {
     }
 
     @Test
+    void aKeyGivenTwiceIsAnError() throws Exception {
+        Path p = yaml("layers:\n  mains: {name: A}\n  mains: {name: B}\n");
+        assertThatThrownBy(() -> FieldMapping.load(p)).isInstanceOf(InputException.class)
+                .hasMessageContaining("mapping.yaml").hasMessageContaining("mains");
+    }
+
+    @Test
     void theReaderUsesTheMappingWithCaseInsensitiveNames() throws Exception {
         assumeTrue(Gdal.has("ogr2ogr"), "ogr2ogr not installed: skipped");
         Path json = TestNetworks.write(dir.resolve("json"), "GAS_MAIN", TestNetworks.collection(

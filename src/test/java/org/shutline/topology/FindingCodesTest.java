@@ -55,7 +55,7 @@ class FindingCodesTest {
     void nearMissOnItsOwnLine() {
         Topology t = new TestNet().main("H", "LP", "LINESTRING (0 0, 20 0, 20 10, 10 10, 10 2)").build();
         Finding f = only(t, FindingCodes.NEAR_MISS);
-        assertThat(f.features()).containsExactly("H", "H");
+        assertThat(f.features()).containsExactly("H");
         assertThat(f.y()).isEqualTo(2.0);
     }
 
@@ -248,5 +248,28 @@ class FindingCodesTest {
             assertThat(f.code()).matches("[a-z]+(-[a-z]+)*");
             assertThat(f.hasLocation()).isTrue();
         });
+    }
+
+    /*  A (0,0)----V1(3,0)----V1(7,0)----(10,0): the second V1 is left out, the first splits A  */
+    @Test
+    void duplicateIdInAPointLayerLeavesTheLaterOneOut() {
+        Topology t = new TestNet().main("A", "LP", "LINESTRING (0 0, 10 0)")
+                .valve("V1", "LP", 3, 0).valve("V1", "LP", 7, 0).build();
+        Finding f = only(t, FindingCodes.DUPLICATE_ID);
+        assertThat(f.layer()).isEqualTo("valves");
+        assertThat(f.x()).isEqualTo(7.0);
+        assertThat(t.graph().valveEdge(0)).isNotNegative();
+        assertThat(t.graph().valveEdge(1)).isEqualTo(-1);
+        assertThat(pipes(t.graph(), 0)).hasSize(2);
+    }
+
+    /*  station whose inlet system has no main at all: unknown-system and station-no-inlet  */
+    @Test
+    void stationOfAnUnknownSystem() {
+        Topology t = new TestNet().main("L", "LP", "LINESTRING (0 0, 10 0)").station("ST", "XHP", "LP", 5, 0).build();
+        assertThat(only(t, FindingCodes.UNKNOWN_SYSTEM).layer()).isEqualTo("stations");
+        assertThat(only(t, FindingCodes.STATION_NO_INLET).features()).containsExactly("ST");
+        assertThat(t.graph().stationEdge(0)).isEqualTo(-1);
+        assertThat(pipes(t.graph(), 0)).hasSize(1);
     }
 }
