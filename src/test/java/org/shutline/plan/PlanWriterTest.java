@@ -62,7 +62,7 @@ class PlanWriterTest {
         // writing the read-back plan again gives the same text: the form is stable
         assertThat(PlanWriter.format(back)).isEqualTo(text);
         assertThat(back.pressureUnit()).isEqualTo(PressureUnit.IN_WC);
-        assertThat(back.steps().get(13).note()).isEqualTo("watch: outlet \"pressure\" # not a comment");
+        assertThat(back.steps().get(14).note()).isEqualTo("watch: outlet \"pressure\" # not a comment");
         assertThat(back.steps().get(10).duration()).isEqualTo(Duration.ofMinutes(90));
         assertThat(((StepAction.CloseValves) back.steps().get(7).action()).ordered()).isFalse();
     }
