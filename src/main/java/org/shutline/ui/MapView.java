@@ -266,10 +266,17 @@ public final class MapView extends JComponent {
         if (ws != null) {
             g.setRenderingHint(java.awt.RenderingHints.KEY_ANTIALIASING, java.awt.RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(java.awt.RenderingHints.KEY_TEXT_ANTIALIASING, java.awt.RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            ScaleBar.paint(g, new Rectangle2D.Double(12, getHeight() - 58, 220, 30), viewport, ws.network().crs().unit(), style);
+            ScaleBar.paint(g, new Rectangle2D.Double(12, getHeight() - 66, 220, 30), viewport, ws.network().crs().unit(), style);
             g.setFont(style.font().deriveFont(10f));
             g.setColor(style.foreground());
-            g.drawString(Caution.SHORT, 12, getHeight() - 10);
+            String c = Caution.SHORT;
+            int cut = c.indexOf("; ");
+            if (g.getFontMetrics().stringWidth(c) > getWidth() - 24 && cut > 0) {
+                g.drawString(c.substring(0, cut + 1), 12, getHeight() - 22);
+                g.drawString(c.substring(cut + 2), 12, getHeight() - 10);
+            } else {
+                g.drawString(c, 12, getHeight() - 10);
+            }
         }
         if (band != null) {
             g.setColor(new Color(MapStyle.OI_BLUE.getRed(), MapStyle.OI_BLUE.getGreen(), MapStyle.OI_BLUE.getBlue(), 50));

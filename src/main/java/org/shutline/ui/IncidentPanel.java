@@ -1,0 +1,137 @@
+package org.shutline.ui;
+
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSpinner;
+import javax.swing.JTextArea;
+import javax.swing.JToggleButton;
+import javax.swing.SpinnerNumberModel;
+import org.locationtech.jts.geom.Geometry;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.ResponseRates;
+import org.shutline.analysis.ResponseSizing;
+import org.shutline.analysis.Zone;
+import org.shutline.model.Severity;
+import org.shutline.model.Valve;
+import org.shutline.render.HazardMark;
+import org.shutline.render.MapOverlays;
+import org.shutline.render.ValveToOperate;
+import org.shutline.trace.ValveSegments;
+
+/**
+ * "Incident": with the pick button down, a click on the map isolates the main nearest
+ * the point in the network as recorded ({@link Isolation} with {@link Zone.AtPoint}, in
+ * a worker): valves to close in order, fallbacks for doubtful valves, services and
+ * meters off, critical customers, stations to stop, and a crew estimate from
+ * {@link ResponseSizing} (shut-off within 4 h, relight within 24 h, default rates).
+ * The region is highlighted and the valves are numbered on the map.
+ */
+final class IncidentPanel extends JPanel {
+    static final double SHUTOFF_TARGET_H = 4;
+    static final double RELIGHT_TARGET_H = 24;
+
+    private final MainWindow window;
+    private final JToggleButton pick = new JToggleButton("Pick incident point");
+    private final JSpinner crews = new JSpinner(new SpinnerNumberModel(4, 1, 200, 1));
+    private final JTextArea text = new JTextArea();
+    private Isolation isolation;
+    private Workspace isolationFor;
+
+    IncidentPanel(MainWindow window) {
+        super(new BorderLayout());
+        this.window = window;
+        text.setEditable(false);
+        text.setName("incidentText");
+        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT));
+        top.add(pick);
+        top.add(new JLabel("crews available:"));
+        top.add(crews);
+        add(top, BorderLayout.NORTH);
+        add(new JScrollPane(text), BorderLayout.CENTER);
+        text.setText("Press \"Pick incident point\", then click a main or a point on the map.");
+    }
+
+    boolean picking() {
+        return pick.isSelected();
+    }
+
+    void setPicking(boolean on) {
+        pick.setSelected(on);
+    }
+
+    /** Isolates at (x, y) in a worker and shows the result. */
+    void at(double x, double y) {
+        Workspace ws = window.workspace();
+        if (ws == null) return;
+        int crewCount = (Integer) crews.getValue();
+        text.setText(String.format(Locale.ROOT, "Isolating at %.1f, %.1f ...", x, y));
+        window.run(new Task<>("isolate", p -> {
+            p.begin("isolate", 0);
+            Isolation iso = isolationFor(ws);
+            return iso.isolate(new Zone.AtPoint(x, y, null));
+        }, r -> show(ws, r, x, y, crewCount), t -> text.setText("Isolation failed: " + t.getMessage())));
+    }
+
+    private synchronized Isolation isolationFor(Workspace ws) {
+        if (isolationFor != ws) {
+            isolation = new Isolation(ws.segments(), Isolation.Options.asOf(LocalDate.now()));
+            isolationFor = ws;
+        }
+        return isolation;
+    }
+
+    private void show(Workspace ws, Isolation.Result r, double x, double y, int crewCount) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(String.format(Locale.ROOT, "Incident at %.1f, %.1f%n", x, y));
+        if (!r.isolable()) sb.append("Valves alone cannot isolate it: ").append(r.reason()).append('\n');
+        sb.append("Valves to close, in order:\n");
+        List<ValveToOperate> marks = new ArrayList<>();
+        for (Isolation.ValveStep v : r.valves()) {
+            sb.append(String.format(Locale.ROOT, "  %d. %s (operable: %s%s)%n", v.order(), v.valveId(),
+                    org.shutline.model.Words.word(v.operable()), v.overdue() ? ", inspection overdue" : ""));
+            int vi = ws.valveIndex(v.valveId());
+            Valve valve = vi < 0 ? null : ws.network().valves().get(vi);
+            if (valve != null && valve.geometry() != null) {
+                marks.add(ValveToOperate.of(v.order(), v.valveId(), valve.geometry().getX(), valve.geometry().getY(), true));
+            }
+        }
+        for (Isolation.Fallback f : r.fallbacks()) {
+            sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): close ")
+                    .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
+                    .append(", adding ").append(f.addedServices().size()).append(" services\n");
+        }
+        if (!r.stationsToStop().isEmpty()) {
+            sb.append("Stations to stop: ").append(String.join(", ", r.stationsToStop()))
+                    .append("; their inlet valves: ").append(String.join(", ", r.stationInletValves())).append('\n');
+        }
+        sb.append(String.format(Locale.ROOT, "Services off: %d, meters off: %d%n", r.serviceIdsOff().size(), r.metersOff()));
+        sb.append("Critical customers off: ").append(r.criticalOff().isEmpty() ? "none" : String.join(", ", r.criticalOff())).append('\n');
+        int meters = (int) Math.min(Integer.MAX_VALUE, r.metersOff());
+        ResponseSizing.Result z = ResponseSizing.size(meters, meters, SHUTOFF_TARGET_H, RELIGHT_TARGET_H, crewCount, ResponseRates.DEFAULT);
+        sb.append(String.format(Locale.ROOT,
+                "Crew estimate (default rates): shut-off %.1f tech-hours, %d crews to finish in %.0f h; relight %.1f tech-hours, %d crews in %.0f h.%n"
+                        + "With %d crews: shut-off %.1f h, relight %.1f h.%n",
+                z.shutoffTechHours(), z.shutoffCrews(), SHUTOFF_TARGET_H, z.relightTechHours(), z.relightCrews(), RELIGHT_TARGET_H,
+                crewCount, z.shutoffHoursWithCrews(), z.relightHoursWithCrews()));
+        text.setText(sb.toString());
+        text.setCaretPosition(0);
+        List<Geometry> region = new ArrayList<>();
+        ValveSegments segs = ws.segments();
+        var reg = r.region();
+        reg.or(r.unintended());
+        for (int s = reg.nextSetBit(0); s >= 0; s = reg.nextSetBit(s + 1)) {
+            for (int m : segs.mains(s)) if (m < ws.network().mains().size()) region.add(ws.network().mains().get(m).geometry());
+        }
+        MapOverlays o = MapOverlays.NONE.withValvesToOperate(marks)
+                .withHazards(List.of(HazardMark.of(x, y, Severity.CRITICAL, "incident")));
+        window.showPanelMarks(o, region);
+        window.status(String.format(Locale.ROOT, "Incident: %d valves to close, %d services off", r.valves().size(), r.serviceIdsOff().size()));
+    }
+}
