@@ -98,7 +98,7 @@ final class MapComposer {
     static void highlight(Graphics2D g, Viewport v, Highlight h) {
         if (h.shapes().isEmpty()) return;
         Envelope view = v.worldEnvelope();
-        double pad = 12 / v.scale();
+        double pad = 12 * v.scale();
         view.expandBy(pad);
         Color pen = g.getColor();
         Stroke st = g.getStroke();

@@ -325,7 +325,7 @@ public final class MapView extends JComponent {
                 listener.rectangle(env);
             } else if (!dragged && SwingUtilities.isLeftMouseButton(e)) {
                 band = null;
-                listener.clicked(viewport.worldX(e.getX()), viewport.worldY(e.getY()), PICK_PX / viewport.scale(), e);
+                listener.clicked(viewport.worldX(e.getX()), viewport.worldY(e.getY()), PICK_PX * viewport.scale(), e);
             }
             selecting = false;
         }

@@ -233,17 +233,25 @@ final class PlanPanel extends JPanel {
         window.run(running);
     }
 
+    /** Builds the chart for a new evaluation (report's chart of services and meters off per step). */
     private void showChart(PlanEvaluation.Result r, int selected) {
         List<Charts.StepFigure> figs = new ArrayList<>();
         for (PlanEvaluation.StepResult s : r.steps()) figs.add(new Charts.StepFigure(s.step().number(), s.servicesOff(), (int) s.metersOff()));
-        JFreeChart c = Charts.offPerStep("Off gas per step", figs);
-        if (selected >= 0 && c.getPlot() instanceof CategoryPlot cp) {
+        chart.setChart(Charts.offPerStep("Off gas per step", figs));
+        markChart(selected);
+    }
+
+    /** Marks the selected step's bars. */
+    private void markChart(int selected) {
+        JFreeChart c = chart.getChart();
+        if (c == null || !(c.getPlot() instanceof CategoryPlot cp)) return;
+        cp.clearDomainMarkers();
+        if (selected >= 0) {
             CategoryMarker m = new CategoryMarker(Integer.toString(selected + 1));
             m.setPaint(new Color(0x56, 0xB4, 0xE9, 90));
             m.setDrawAsLine(false);
             cp.addDomainMarker(m);
         }
-        chart.setChart(c);
     }
 
     private void showStep(int i) {
@@ -277,7 +285,7 @@ final class PlanPanel extends JPanel {
         for (String n : s.notices()) d.append("note: ").append(n).append('\n');
         details.setText(d.toString());
         details.setCaretPosition(0);
-        showChart(r, i);
+        markChart(i);
         window.showPanelMarks(PlanRun.overlays(window.workspace(), s), List.of());
         window.status("Step " + s.step().number() + ": " + s.step().describe());
     }

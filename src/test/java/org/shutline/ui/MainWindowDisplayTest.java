@@ -1,0 +1,183 @@
+package org.shutline.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.EventQueue;
+import java.awt.GraphicsEnvironment;
+import java.awt.Point;
+import java.awt.Robot;
+import java.awt.event.InputEvent;
+import java.awt.geom.Point2D;
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.prefs.Preferences;
+import javax.imageio.ImageIO;
+import javax.swing.JLabel;
+import javax.swing.JList;
+import javax.swing.JTextArea;
+import javax.swing.ListModel;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The real window on a display (run under {@code xvfb-run -a mvn -B verify -Pdisplay}):
+ * opens the sample network with the Elder Street test plan, selects the step that
+ * abandons the cast-iron main, and checks what the work-plan panel and the status line
+ * show; clicks a valve with java.awt.Robot and checks the feature facts; the event-thread
+ * watch must have seen no dispatch over its threshold while the test drove the window.
+ * Skipped (visibly) when headless. With {@code -Dshutline.screenshot=PATH} it also
+ * writes the window with the hazard step selected to PATH.
+ */
+@Tag("display")
+class MainWindowDisplayTest {
+    private static MainWindow win;
+    private static EdtWatch watch;
+    private static String prefsNode;
+
+    @BeforeEach
+    void open() throws Exception {
+        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: window tests skipped (run them under xvfb-run -a with -Pdisplay)");
+        if (win != null) return;
+        prefsNode = "org/shutline/uitest-" + ProcessHandle.current().pid();
+        System.setProperty("shutline.prefs", prefsNode);
+        watch = EdtWatch.install(EdtWatch.thresholdFromProperty(), true);
+        win = MainWindow.showOn(SampleWorkspace.NETWORK, SampleWorkspace.PLAN);
+        EventQueue.invokeAndWait(() -> {
+            win.setBounds(0, 0, 1600, 1000);
+            win.validate();
+        });
+        waitFor("plan evaluated", () -> win.planPanel().result() != null);
+        waitFor("map drawn", () -> win.map().isSettled());
+    }
+
+    @AfterAll
+    static void close() throws Exception {
+        if (win != null) EventQueue.invokeAndWait(() -> win.dispose());
+        if (prefsNode != null) Preferences.userRoot().node(prefsNode).removeNode();
+    }
+
+    @Test
+    void theHazardStepShowsServicesOffTheHazardAndTheCaution() throws Exception {
+        // warm-up: class loading, JIT and the first paint of each step (as after a minute of use);
+        // from then on the event thread must stay responsive
+        for (int i = 0; i < 3; i++) {
+            int k = i;
+            onEdt(() -> {
+                win.planPanel().selectStep(k);
+                return null;
+            });
+            waitFor("map drawn", () -> win.map().isSettled());
+            Thread.sleep(200);
+        }
+        watch.reset();
+        onEdt(() -> {
+            win.planPanel().selectStep(2);
+            return null;
+        });
+        waitFor("map drawn", () -> win.map().isSettled());
+        String summary = onEdt(() -> ((JLabel) find(win, "planSummary")).getText());
+        assertThat(summary).contains("Step 3: 5 services off, 7 meters off, 1 critical customers off");
+        List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
+        assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL tap-on-dead-main") && h.contains("T-S1-W"));
+        assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
+        assertThat(onEdt(() -> win.map().overlays().hazards())).anyMatch(h -> h.text().equals("tap-on-dead-main"));
+        screenshotIfAsked();
+        // next step with the keyboard shortcut's action: back to step 2, nothing off
+        onEdt(() -> {
+            win.stepBy(-1);
+            return null;
+        });
+        assertThat(onEdt(() -> ((JLabel) find(win, "planSummary")).getText())).contains("Step 2: 0 services off");
+        waitFor("map drawn", () -> win.map().isSettled());
+        assertThat(watch.longDispatches()).as("event-thread dispatches over %.0f ms", watch.thresholdMs()).isEmpty();
+    }
+
+    @Test
+    void clickingAValveWithTheMouseShowsItsFacts() throws Exception {
+        Robot robot = new Robot();
+        robot.setAutoDelay(30);
+        var ws = win.workspace();
+        var v = ws.network().valves().get(ws.valveIndex("V-016")).geometry();
+        onEdt(() -> {
+            win.map().zoomTo(new org.locationtech.jts.geom.Envelope(v.getX() - 80, v.getX() + 80, v.getY() - 80, v.getY() + 80), 160);
+            return null;
+        });
+        waitFor("map drawn", () -> win.map().isSettled());
+        Point onScreen = onEdt(() -> {
+            Point2D p = win.map().viewport().screenOf(v.getX(), v.getY());
+            Point base = win.map().getLocationOnScreen();
+            return new Point(base.x + (int) Math.round(p.getX()), base.y + (int) Math.round(p.getY()));
+        });
+        robot.mouseMove(onScreen.x, onScreen.y);
+        robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
+        robot.mouseRelease(InputEvent.BUTTON1_DOWN_MASK);
+        robot.waitForIdle();
+        waitFor("facts shown", () -> ((JTextArea) find(win, "facts")).getText().startsWith("valve V-016"));
+        String facts = onEdt(() -> ((JTextArea) find(win, "facts")).getText());
+        assertThat(facts).contains("normal: closed", "valve segment #", "valves bounding it: ");
+        assertThat(onEdt(() -> ((JLabel) find(win, "coords")).getText())).startsWith("E ");
+        assertThat(onEdt(() -> ((JLabel) find(win, "gridRef")).getText())).startsWith("15T");
+    }
+
+    private static void screenshotIfAsked() throws Exception {
+        String out = System.getProperty("shutline.screenshot");
+        if (out == null || out.isBlank()) return;
+        BufferedImage img = onEdt(() -> {
+            BufferedImage b = new BufferedImage(win.getRootPane().getWidth(), win.getRootPane().getHeight(), BufferedImage.TYPE_INT_RGB);
+            var g = b.createGraphics();
+            win.getRootPane().paint(g);
+            g.dispose();
+            return b;
+        });
+        ImageIO.write(img, "png", Path.of(out).toFile());
+    }
+
+    private static Component find(Container c, String name) {
+        for (Component k : c.getComponents()) {
+            if (name.equals(k.getName())) return k;
+            if (k instanceof Container kc) {
+                Component f = find(kc, name);
+                if (f != null) return f;
+            }
+        }
+        return null;
+    }
+
+    private static List<String> items(ListModel<?> m) {
+        List<String> l = new ArrayList<>();
+        for (int i = 0; i < m.getSize(); i++) l.add(String.valueOf(m.getElementAt(i)));
+        return l;
+    }
+
+    private static <T> T onEdt(Callable<T> c) throws Exception {
+        AtomicReference<T> r = new AtomicReference<>();
+        AtomicReference<Exception> e = new AtomicReference<>();
+        EventQueue.invokeAndWait(() -> {
+            try {
+                r.set(c.call());
+            } catch (Exception x) {
+                e.set(x);
+            }
+        });
+        if (e.get() != null) throw e.get();
+        return r.get();
+    }
+
+    private static void waitFor(String what, Callable<Boolean> c) throws Exception {
+        long end = System.nanoTime() + 60_000_000_000L;
+        while (System.nanoTime() < end) {
+            if (Boolean.TRUE.equals(onEdt(c))) return;
+            Thread.sleep(50);
+        }
+        throw new AssertionError("timed out waiting: " + what);
+    }
+}
