@@ -52,6 +52,12 @@ final class MapComposer {
 
     static void paint(Graphics2D g, Viewport v, Workspace ws, MapStyle style, MapLayers layers, MapOverlays overlays,
                       List<Highlight> highlights, boolean antialias) {
+        paint(g, v, ws, style, layers, overlays, highlights, antialias, true);
+    }
+
+    /** As above; without {@code background} the picture is drawn over what {@code g} holds (the overview case). */
+    static void paint(Graphics2D g, Viewport v, Workspace ws, MapStyle style, MapLayers layers, MapOverlays overlays,
+                      List<Highlight> highlights, boolean antialias, boolean background) {
         MapPainter net = new MapPainter(ws.scene(), style).withAntialias(antialias);
         List<LayerPainter> painters = net.layers(overlays);
         if (painters.size() != 10) throw new IllegalStateException("render's layer list changed: " + painters.size() + " layers");
@@ -61,10 +67,13 @@ final class MapComposer {
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING,
                 antialias ? RenderingHints.VALUE_TEXT_ANTIALIAS_ON : RenderingHints.VALUE_TEXT_ANTIALIAS_OFF);
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
-        g.setColor(style.background());
-        g.fillRect(0, 0, v.width(), v.height());
+        if (background) {
+            g.setColor(style.background());
+            g.fillRect(0, 0, v.width(), v.height());
+        }
         PaintContext ctx = new PaintContext(ws.scene(), style, v);
-        boolean highlighted = false;
+        boolean highlighted = layers.entries().stream().noneMatch(e -> e.net() == MapLayers.Net.MAINS);
+        if (highlighted) for (Highlight h : highlights) highlight(g, v, h);
         for (MapLayers.Entry e : layers.entries()) {
             if (!highlighted && e.net() == MapLayers.Net.MAINS) {
                 for (Highlight h : highlights) highlight(g, v, h);

@@ -77,6 +77,14 @@ public final class MapView extends JComponent {
     private Viewport viewport = new Viewport(0, 0, 1, 800, 600);
     private long generation;
     private volatile Frame frame;
+    private volatile Overview overview;
+    private final AtomicBoolean overviewBuilding = new AtomicBoolean();
+    private final ExecutorService overviewBuilder = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "shutline-map-overview");
+        t.setDaemon(true);
+        t.setPriority(Thread.MIN_PRIORITY);
+        return t;
+    });
     private volatile double lastRenderMs;
     private Rectangle band;
 
@@ -214,7 +222,14 @@ public final class MapView extends JComponent {
         Snapshot s;
         while ((s = pending.getAndSet(null)) != null) {
             long t0 = System.nanoTime();
-            BufferedImage img = render(s.viewport(), s.ws(), s.style(), s.layers(), s.overlays(), s.highlights(), true);
+            BufferedImage img;
+            Overview ov = overview;
+            if (Overview.wanted(s.ws()) && ov != null && ov.serves(s.ws(), s.style(), s.layers(), s.viewport())) {
+                img = ov.render(s.viewport(), s.overlays(), s.highlights());
+            } else {
+                img = render(s.viewport(), s.ws(), s.style(), s.layers(), s.overlays(), s.highlights(), true);
+            }
+            if (Overview.wanted(s.ws()) && (ov == null || !ov.matches(s.ws(), s.style(), s.layers()))) buildOverview(s);
             double ms = (System.nanoTime() - t0) / 1e6;
             Frame f = new Frame(img, s.viewport(), s.generation());
             SwingUtilities.invokeLater(() -> {
@@ -224,6 +239,19 @@ public final class MapView extends JComponent {
                 repaint();
             });
         }
+    }
+
+    /** Builds the overview picture for the snapshot's settings in the background, then redraws. */
+    private void buildOverview(Snapshot s) {
+        if (overviewBuilding.getAndSet(true)) return;
+        overviewBuilder.execute(() -> {
+            try {
+                overview = Overview.build(s.ws(), s.style(), s.layers());
+            } finally {
+                overviewBuilding.set(false);
+            }
+            SwingUtilities.invokeLater(this::requestRender);
+        });
     }
 
     /** Paints a picture synchronously (the render thread, exports of the view, tests). */

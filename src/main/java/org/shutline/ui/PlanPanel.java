@@ -31,7 +31,9 @@ import org.shutline.model.Words;
 import org.shutline.plan.Plan;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.StepAction;
+import org.shutline.render.MapOverlays;
 import org.shutline.report.Charts;
+import org.locationtech.jts.geom.Envelope;
 
 /**
  * "Work plan": the steps of the open plan as a list (phase and step number, action,
@@ -286,11 +288,24 @@ final class PlanPanel extends JPanel {
         details.setText(d.toString());
         details.setCaretPosition(0);
         markChart(i);
-        window.showPanelMarks(PlanRun.overlays(window.workspace(), s), List.of());
+        MapOverlays o = PlanRun.overlays(window.workspace(), s);
+        window.showPanelMarks(o, List.of());
+        followStep(o);
         window.status("Step " + s.step().number() + ": " + s.step().describe());
     }
 
-    private void addForSelection(String kind) {
+    /** Brings the step's marks into view when some lie outside it (keeps the zoom otherwise). */
+    private void followStep(MapOverlays o) {
+        Envelope env = new Envelope();
+        for (var g : o.gasOff()) env.expandToInclude(g.area().getEnvelopeInternal());
+        for (var v : o.valvesToOperate()) env.expandToInclude(v.x(), v.y());
+        for (var h : o.hazards()) env.expandToInclude(h.x(), h.y());
+        if (env.isNull() || window.map().viewport().worldEnvelope().contains(env)) return;
+        window.map().zoomTo(env, 300);
+    }
+
+    /** Adds a step of this kind ("close", "open", "abandon", "activate", "station_out", "station_in") for the selected feature. */
+    void addForSelection(String kind) {
         Workspace ws = window.workspace();
         if (ws == null) return;
         if (draft == null) newPlan();
@@ -316,7 +331,12 @@ final class PlanPanel extends JPanel {
         edited(at);
     }
 
-    private void removeStep() {
+    /** The error line (empty when the plan evaluates). */
+    String errorText() {
+        return error.getText().trim();
+    }
+
+    void removeStep() {
         int i = steps.getSelectedIndex();
         if (draft == null || i < 0) return;
         draft.remove(i);

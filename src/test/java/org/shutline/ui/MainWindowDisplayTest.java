@@ -42,6 +42,7 @@ class MainWindowDisplayTest {
     private static MainWindow win;
     private static EdtWatch watch;
     private static String prefsNode;
+    private static Path planCopy;
 
     @BeforeEach
     void open() throws Exception {
@@ -50,7 +51,11 @@ class MainWindowDisplayTest {
         prefsNode = "org/shutline/uitest-" + ProcessHandle.current().pid();
         System.setProperty("shutline.prefs", prefsNode);
         watch = EdtWatch.install(EdtWatch.thresholdFromProperty(), true);
-        win = MainWindow.showOn(SampleWorkspace.NETWORK, SampleWorkspace.PLAN);
+        // the window saves the plan it edits: give it a copy, never the test resource
+        Path dir = java.nio.file.Files.createTempDirectory("shutline-window-test");
+        planCopy = dir.resolve("elder-street-plan.yaml");
+        java.nio.file.Files.copy(SampleWorkspace.PLAN, planCopy);
+        win = MainWindow.showOn(SampleWorkspace.NETWORK, planCopy);
         EventQueue.invokeAndWait(() -> {
             win.setBounds(0, 0, 1600, 1000);
             win.validate();
@@ -90,7 +95,19 @@ class MainWindowDisplayTest {
         assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL tap-on-dead-main") && h.contains("T-S1-W"));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
         assertThat(onEdt(() -> win.map().overlays().hazards())).anyMatch(h -> h.text().equals("tap-on-dead-main"));
-        screenshotIfAsked();
+        if (System.getProperty("shutline.screenshot") != null) {
+            // the picture for docs/screenshot-main.png: the tap on the abandoned main selected, the work area in view
+            onEdt(() -> {
+                win.find("T-S1-W");
+                var t = win.workspace().network().taps().stream().filter(x -> x.id().equals("T-S1-W")).findFirst().orElseThrow();
+                var g = t.geometry();
+                win.map().zoomTo(new org.locationtech.jts.geom.Envelope(g.getX() - 260, g.getX() + 260, g.getY() - 200, g.getY() + 200), 400);
+                return null;
+            });
+            waitFor("map drawn", () -> win.map().isSettled());
+            Thread.sleep(300);
+            screenshotIfAsked();
+        }
         // next step with the keyboard shortcut's action: back to step 2, nothing off
         onEdt(() -> {
             win.stepBy(-1);
@@ -99,6 +116,43 @@ class MainWindowDisplayTest {
         assertThat(onEdt(() -> ((JLabel) find(win, "planSummary")).getText())).contains("Step 2: 0 services off");
         waitFor("map drawn", () -> win.map().isSettled());
         assertThat(watch.longDispatches()).as("event-thread dispatches over %.0f ms", watch.thresholdMs()).isEmpty();
+    }
+
+    @Test
+    void editingThePlanReEvaluatesShowsErrorsAndSavesARoundTrippingFile() throws Exception {
+        // abandon M-CI-01 a second time, after step 3: the applier refuses, the error line says so
+        onEdt(() -> {
+            win.find("M-CI-01");
+            win.planPanel().selectStep(2);
+            win.planPanel().addForSelection("abandon");
+            return null;
+        });
+        waitFor("error shown", () -> win.planPanel().errorText().startsWith("elder-street-plan.yaml:"));
+        assertThat(onEdt(() -> win.planPanel().errorText())).contains("step 4");
+        // remove it again; close V-016's neighbour instead: pick valve V-001 and add a close step
+        onEdt(() -> {
+            win.planPanel().removeStep();
+            win.find("V-001");
+            win.planPanel().selectStep(0);
+            win.planPanel().addForSelection("close");
+            return null;
+        });
+        waitFor("evaluated", () -> win.planPanel().result() != null && win.planPanel().result().steps().size() == 4);
+        assertThat(onEdt(() -> win.planPanel().errorText())).isEmpty();
+        assertThat(onEdt(() -> win.planPanel().isDirty())).isTrue();
+        assertThat(onEdt(() -> win.savePlan())).isTrue();
+        assertThat(onEdt(() -> win.planPanel().isDirty())).isFalse();
+        var saved = org.shutline.plan.PlanReader.read(planCopy);
+        assertThat(saved.steps()).extracting(st -> st.describe())
+                .containsExactly("take station ST-N2 out of service", "close V-001", "return station ST-N2 to service", "abandon M-CI-01");
+        assertThat(saved.steps().get(0).note()).isEqualTo("check the grid holds on ST-N1");
+        // back to the plan as it was, for the other tests
+        onEdt(() -> {
+            win.planPanel().selectStep(1);
+            win.planPanel().removeStep();
+            return null;
+        });
+        waitFor("evaluated", () -> win.planPanel().result() != null && win.planPanel().result().steps().size() == 3);
     }
 
     @Test
