@@ -294,6 +294,10 @@ public final class MapView extends JComponent {
         if (ws != null) {
             g.setRenderingHint(java.awt.RenderingHints.KEY_ANTIALIASING, java.awt.RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(java.awt.RenderingHints.KEY_TEXT_ANTIALIASING, java.awt.RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            Color bg = style.background();
+            g.setColor(new Color(bg.getRed(), bg.getGreen(), bg.getBlue(), 210));
+            g.fillRect(6, getHeight() - 70, 232, 36);
+            g.fillRect(0, getHeight() - 34, getWidth(), 34);
             ScaleBar.paint(g, new Rectangle2D.Double(12, getHeight() - 66, 220, 30), viewport, ws.network().crs().unit(), style);
             g.setFont(style.font().deriveFont(10f));
             g.setColor(style.foreground());

@@ -252,7 +252,7 @@ final class PlanPanel extends JPanel {
             CategoryMarker m = new CategoryMarker(Integer.toString(selected + 1));
             m.setPaint(new Color(0x56, 0xB4, 0xE9, 90));
             m.setDrawAsLine(false);
-            cp.addDomainMarker(m);
+            cp.addDomainMarker(m, org.jfree.chart.ui.Layer.BACKGROUND);
         }
     }
 
