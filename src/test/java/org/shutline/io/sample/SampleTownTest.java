@@ -69,6 +69,22 @@ class SampleTownTest {
         }
     }
 
+    /** The committed sample files are what the generator writes today (regenerate them when it changes). */
+    @Test
+    void committedSampleShapefilesAreCurrent() throws Exception {
+        Path committed = Path.of("sample-gis", "tallowmere-shp");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isDirectory(committed), "sample-gis not present: skipped");
+        TOWN.writeShapefiles(dir.resolve("now"), org.shutline.model.Progress.NONE);
+        for (String layer : List.of("mains", "valves", "services", "stations", "sense_taps", "sources", "streets")) {
+            for (String ext : List.of("shp", "shx", "prj", "cpg")) {
+                assertThat(Files.readAllBytes(committed.resolve(layer + "." + ext))).as(layer + "." + ext
+                    + " differs: run ./shutline generate sample-gis/tallowmere-shp (and .gpkg)")
+                    .isEqualTo(Files.readAllBytes(dir.resolve("now").resolve(layer + "." + ext)));
+            }
+        }
+        assertThat(Files.size(Path.of("sample-gis", "tallowmere.gpkg"))).isGreaterThan(100_000);
+    }
+
     @Test
     void countsTheDemoNeeds() {
         assertThat(N.services()).hasSizeBetween(1400, 1600);
