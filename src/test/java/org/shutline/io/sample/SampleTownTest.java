@@ -85,6 +85,20 @@ class SampleTownTest {
         assertThat(Files.size(Path.of("sample-gis", "tallowmere.gpkg"))).isGreaterThan(100_000);
     }
 
+    /** GDAL's ogrinfo sees the raw misspelt word and the CRS in both committed files. */
+    @Test
+    void committedFilesCarryTheRawWordInGdal() throws Exception {
+        Path ogrinfo = Path.of("/usr/bin/ogrinfo");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isExecutable(ogrinfo), "ogrinfo not installed: skipped");
+        for (String f : List.of("sample-gis/tallowmere.gpkg", "sample-gis/tallowmere-shp")) {
+            Process p = new ProcessBuilder(ogrinfo.toString(), "-ro", "-al", f, "mains", "-where",
+                "main_id = '" + SampleTown.MISSPELT_MAIN + "'").redirectErrorStream(true).start();
+            String out = new String(p.getInputStream().readAllBytes());
+            assertThat(p.waitFor()).as(out).isZero();
+            assertThat(out).as(f).contains("Feature Count: 1", "status (String) = actve", "UTM zone 15N");
+        }
+    }
+
     @Test
     void countsTheDemoNeeds() {
         assertThat(N.services()).hasSizeBetween(1400, 1600);
