@@ -88,6 +88,8 @@ public final class SampleTown {
     static final double LP_OFF = 3;
     static final double IP_OFF = -3;
     static final double LP_KPA = 1.74; // 7 in w.c. (NIST SP 811: 7 x 249.0889 Pa)
+    /** MAOP of low-pressure mains: 0.5 psi = 14 in w.c. = 3.45 kPa, the usual low-pressure ceiling (trade-facts.md). */
+    static final double LP_MAOP = 3.45;
 
     private static final String[] EAST_WEST = {"Alder Row", "Birch Street", "Cedar Walk", "Damson Road",
         "Elder Street", "Fennel Way", "Gorse Avenue", "Hazel Row", "Juniper Street", "Larch Road", "Medlar Way",
@@ -218,26 +220,26 @@ public final class SampleTown {
         }
         boolean old = rnd.nextInt(5) == 0;
         int i = addMain(nextMainId(prefix), sys, MainStatus.ACTIVE, old ? "steel" : "PE", old ? 100.0 : 63.0,
-            old ? 7.0 : 415.0, old ? 1961 + rnd.nextInt(20) : 1985 + rnd.nextInt(38), line(start, b));
+            LP_MAOP, old ? 1961 + rnd.nextInt(20) : 1985 + rnd.nextInt(38), line(start, b));
         serviceMains.add(new int[] {i, number});
         mainStreet.put(i, street);
     }
 
     private void specialMains() {
-        int ci = addMain(CAST_IRON_MAIN, "LP-SOUTH", MainStatus.ACTIVE, "cast iron", 100.0, 7.0, 1952,
+        int ci = addMain(CAST_IRON_MAIN, "LP-SOUTH", MainStatus.ACTIVE, "cast iron", 100.0, LP_MAOP, 1952,
             line(lp(3, 4), lp(4, 4), lp(5, 4)));
         serviceMains.add(new int[] {ci, 400});
         mainStreet.put(ci, EAST_WEST[4]);
         Coordinate p0 = lp(3, 4);
-        addMain(PROPOSED_MAIN, "LP-SOUTH", MainStatus.PROPOSED, "PE", 110.0, 7.0, null,
+        addMain(PROPOSED_MAIN, "LP-SOUTH", MainStatus.PROPOSED, "PE", 110.0, LP_MAOP, null,
             line(new Coordinate(p0.x + 5, p0.y - 4), new Coordinate(p0.x + 195, p0.y - 4)));
         Coordinate n0 = lp(13, 4);
-        int nm = addMain(NEAR_MISS_MAIN, "LP-EAST", MainStatus.ACTIVE, "PE", 63.0, 415.0, 2004,
+        int nm = addMain(NEAR_MISS_MAIN, "LP-EAST", MainStatus.ACTIVE, "PE", 63.0, LP_MAOP, 2004,
             line(n0, new Coordinate(n0.x + BLOCK - 1.2, n0.y)));
         serviceMains.add(new int[] {nm, 1400});
         mainStreet.put(nm, EAST_WEST[4]);
         double ax = X0 + 5 * BLOCK + 53;
-        int al = addMain(CROSSING_MAIN, "LP-NORTH", MainStatus.ACTIVE, "PE", 63.0, 415.0, 1999,
+        int al = addMain(CROSSING_MAIN, "LP-NORTH", MainStatus.ACTIVE, "PE", 63.0, LP_MAOP, 1999,
             line(new Coordinate(ax, Y0 + 8 * BLOCK + LP_OFF), new Coordinate(ax, Y0 + 10 * BLOCK + LP_OFF)));
         serviceMains.add(new int[] {al, 800});
         mainStreet.put(al, "Cooper Yard");
@@ -261,7 +263,7 @@ public final class SampleTown {
     }
 
     private void station(String id, String out, String name, Coordinate node, Coordinate at, Double mon, Double rel) {
-        addMain("M-STUB-" + id.substring(3), out, MainStatus.ACTIVE, "steel", 150.0, 7.0, 1990, line(at, node));
+        addMain("M-STUB-" + id.substring(3), out, MainStatus.ACTIVE, "steel", 150.0, LP_MAOP, 1990, line(at, node));
         stations.add(new Station(id, "IP-1", out, LP_KPA, mon, rel, name, point(at.x, at.y)));
         // inlet valve on IP-1, 1 m along the main from the station's projection: 1.80 m from the station
         boolean vertical = at.x == X0 + 998.5;
