@@ -130,6 +130,7 @@ public final class SampleTown {
         specialMains();
         stationsAndTaps();
         lpValves();
+        workValves();
         services();
         flaws();
         Network n = new Network(NAME, CRS, mains, valves, stations, taps, services, sources,
@@ -301,7 +302,7 @@ public final class SampleTown {
     private void lpValves() {
         List<int[]> candidates = new ArrayList<>(serviceMains);
         int placed = 0;
-        for (int j = 0; j < candidates.size() && placed < 44; j++) {
+        for (int j = 0; j < candidates.size() && placed < 36; j++) {
             int[] m = candidates.get((j * 37) % candidates.size());
             Main main = mains.get(m[0]);
             if (main.id().equals(CROSSING_MAIN) || main.id().equals(NEAR_MISS_MAIN)) continue;
@@ -311,6 +312,51 @@ public final class SampleTown {
         // two normally closed valves in LP-NORTH
         closeValve(nearestValve("LP-NORTH", lp(7, 9)));
         closeValve(nearestValve("LP-NORTH", lp(8, 10)));
+    }
+
+    /**
+     * Valves for the sample work plan (operable, checked two months before {@link #AS_OF}):
+     * four around each end junction of the cast-iron main (Elder Street at Tannery Lane and
+     * at Weir Lane), 4-7 m from the junction on every main that meets there, so a junction
+     * can be isolated for a tie-in; and one on the Cooper Street main 4 m north of its tee
+     * on the cast-iron main.
+     */
+    private void workValves() {
+        LocalDate checked = AS_OF.minusMonths(2);
+        Coordinate w = lp(3, 4);
+        Coordinate e = lp(5, 4);
+        Coordinate c = lp(4, 4);
+        String[][] ids = {{"V-TAN-N", "V-TAN-S", "V-ELD-W", "V-CI-W"}, {"V-WEI-N", "V-WEI-S", "V-CI-E", "V-ELD-E"}};
+        Coordinate[] ends = {w, e};
+        for (int k = 0; k < 2; k++) {
+            Coordinate j = ends[k];
+            double[][] at = {{j.x, j.y + 4}, {j.x, j.y - 9}, {j.x - 4, j.y}, {j.x + 4, j.y}};
+            for (int i = 0; i < 4; i++) {
+                valves.add(new Valve(ids[k][i], "LP-SOUTH", ValveKind.MAIN, NormalPosition.OPEN, Operability.YES, checked,
+                    onMain("LP-SOUTH", at[i][0], at[i][1])));
+            }
+        }
+        valves.add(new Valve("V-COO-N", "LP-SOUTH", ValveKind.MAIN, NormalPosition.OPEN, Operability.YES, checked,
+            onMain("LP-SOUTH", c.x, c.y + 4)));
+    }
+
+    /** The point of the nearest main of {@code sys} to (x, y), so a valve lies exactly on its main. */
+    private Point onMain(String sys, double x, double y) {
+        Point q = point(x, y);
+        Main best = null;
+        double d = Double.MAX_VALUE;
+        for (Main m : mains) {
+            if (!m.systemId().equals(sys)) continue;
+            double dm = m.geometry().distance(q);
+            if (dm < d) {
+                d = dm;
+                best = m;
+            }
+        }
+        if (best == null) throw new IllegalStateException("no main of " + sys);
+        LengthIndexedLine lil = new LengthIndexedLine(best.geometry());
+        Coordinate c = lil.extractPoint(lil.project(q.getCoordinate()));
+        return point(c.x, c.y);
     }
 
     private int nearestValve(String sys, Coordinate c) {
