@@ -68,7 +68,7 @@ class IsolationPropertyTest {
     /** Services without gas after isolating a segment: off, or not fed to begin with. */
     private static BitSet withoutGas(NetworkState s, ValveSegments vs, int seg) {
         Isolation.Result r = new Isolation(vs, OPTIONS).isolate(new Zone.OfSegments(new int[] {seg}));
-        BitSet without = FeedTrace.run(s).unfedServices(s.serviceCount());
+        BitSet without = FeedTrace.run(s).unfedServices();
         without.or(r.servicesOff());
         return without;
     }
