@@ -78,6 +78,40 @@ public final class RandomNet {
         return sketch(seed).net();
     }
 
+    /**
+     * One large grid system for benchmarks: w x h nodes, every grid edge a main, a valve
+     * on 70 % of them (15 % of those inoperable), one service per main, sources at two corners.
+     */
+    public static TestNet largeGrid(long seed, int w, int h) {
+        Random rnd = new Random(seed);
+        NetSketch sk = new NetSketch();
+        int[][] g = new int[w][h];
+        for (int i = 0; i < w; i++) for (int j = 0; j < h; j++) g[i][j] = sk.node(i * 100, j * 100);
+        int mainNo = 0, valveNo = 0;
+        for (int i = 0; i < w; i++) {
+            for (int j = 0; j < h; j++) {
+                for (int dir = 0; dir < 2; dir++) {
+                    int i2 = dir == 0 ? i + 1 : i, j2 = dir == 0 ? j : j + 1;
+                    if (i2 >= w || j2 >= h) continue;
+                    String id = "m" + (mainNo++);
+                    List<NetSketch.Stop> stops = new ArrayList<>();
+                    stops.add(NetSketch.Stop.node(g[i][j]));
+                    if (rnd.nextDouble() < 0.7) {
+                        String vid = "v" + (valveNo++);
+                        stops.add(NetSketch.Stop.valve(vid, (i + i2) * 50.0, (j + j2) * 50.0));
+                        if (rnd.nextDouble() < 0.15) sk.operable(vid, Operability.NO);
+                    }
+                    stops.add(NetSketch.Stop.node(g[i2][j2]));
+                    sk.main(id, "P0", MainStatus.ACTIVE, stops);
+                    sk.service("s" + mainNo, id, 0, 1, null);
+                }
+            }
+        }
+        sk.source("src0", g[0][0]);
+        sk.source("src1", g[w - 1][h - 1]);
+        return new TestNet(sk.build(), java.util.Map.of());
+    }
+
     private static int pick(int[][] g, Random rnd) {
         return g[rnd.nextInt(g.length)][rnd.nextInt(g[0].length)];
     }
