@@ -46,5 +46,17 @@ public final class OutageBenchmark {
         double perCase = (b1 - b0) / 1e6 / sample;
         System.out.printf("brute force %.3f ms per segment case, about %.0f ms for all %d segments (sum %d)%n",
                 perCase, perCase * vs.segmentCount(), vs.segmentCount(), check);
+        int nv = s.valveCount(), vsample = Math.min(200, nv);
+        long v0 = System.nanoTime();
+        for (int i = 0; i < vsample; i++) {
+            int v = (int) ((long) i * nv / vsample);
+            if (brute.servicesOffWhenFails(v) != tab.servicesOffWhenFails(v)) {
+                throw new IllegalStateException("mismatch at valve " + v);
+            }
+        }
+        long v1 = System.nanoTime();
+        double perValve = (v1 - v0) / 1e6 / vsample;
+        System.out.printf("brute force %.3f ms per valve case, about %.0f ms for all %d valves%n",
+                perValve, perValve * nv, nv);
     }
 }
