@@ -44,6 +44,12 @@ class IsolationPropertyTest {
             Isolation.Result r = iso.isolate(new Zone.OfSegments(new int[] {seg}));
             assertThat((long) r.serviceIdsOff().size()).as("seed %d segment %d: table", seed, seg)
                     .isEqualTo(tab.servicesOffWhenIsolated(seg));
+            for (Isolation.Fallback f : r.fallbacks()) {
+                // the fallback region is both sides of the failed valve: the valve table's case
+                assertThat((long) r.serviceIdsOff().size() + f.addedServices().size())
+                        .as("seed %d segment %d fallback %s", seed, seg, f.valveId())
+                        .isEqualTo(tab.servicesOffWhenFails(t.valve(f.valveId())));
+            }
             if (!r.sourcesInRegion().isEmpty()) continue;
             FeedTrace.Result post = FeedTrace.run(after(base, t, r));
             BitSet region = r.region();
