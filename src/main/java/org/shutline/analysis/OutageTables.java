@@ -50,7 +50,7 @@ public final class OutageTables {
     private final int[] valveUnitA, valveUnitB;
     private final long[] unitServicesOff;
 
-    private OutageTables(ValveSegments segs, Progress progress) {
+    private OutageTables(ValveSegments segs, Progress progress, boolean localPairs) {
         this.segs = segs;
         SegmentGraph sg = segs.graph();
         int nseg = sg.segmentCount();
@@ -97,7 +97,8 @@ public final class OutageTables {
         valveUnitB = new int[nv];
         Arrays.fill(valveUnitA, -1);
         Arrays.fill(valveUnitB, -1);
-        PairLoss loss = new PairLoss(dom, csr[0], csr[1], svc, met, subSvc, subMet);
+        PairCut loss = new PairCut(dom, csr[0], csr[1], svc, met, subSvc, subMet);
+        loss.localAllowed = localPairs;
         for (int v = 0; v < nv; v++) {
             int l = sg.valveLink(v);
             if (l < 0 || !sg.isOpen(l) || sg.isOpenInoperable(l)) continue;
@@ -113,11 +114,16 @@ public final class OutageTables {
     }
 
     public static OutageTables build(ValveSegments segs) {
-        return new OutageTables(segs, Progress.NONE);
+        return new OutageTables(segs, Progress.NONE, true);
+    }
+
+    /** Tables whose valve cases all use the BFS in the common dominator's subtree (tests). */
+    static OutageTables buildWithoutLocalPairs(ValveSegments segs) {
+        return new OutageTables(segs, Progress.NONE, false);
     }
 
     public static OutageTables build(ValveSegments segs, Progress progress) {
-        return new OutageTables(segs, progress);
+        return new OutageTables(segs, progress, true);
     }
 
     /** Union-find of segments across open inoperable valves; units numbered 0.. in segment order. */
@@ -182,69 +188,6 @@ public final class OutageTables {
         int[] succ = new int[c];
         for (int i = 0; i < c; i++) succ[i] = to[g[1][i]];
         return new int[][] {g[0], succ};
-    }
-
-    /** Loss when units a and b are both removed, by the dominator tree or a BFS inside the common dominator's subtree. */
-    private static final class PairLoss {
-        final Dominators dom;
-        final int[] start, succ;
-        final long[] svc, met, subSvc, subMet;
-        final int[] mark;
-        final int[] queue;
-        int epoch;
-        long services, meters;
-
-        PairLoss(Dominators dom, int[] start, int[] succ, long[] svc, long[] met, long[] subSvc, long[] subMet) {
-            this.dom = dom;
-            this.start = start;
-            this.succ = succ;
-            this.svc = svc;
-            this.met = met;
-            this.subSvc = subSvc;
-            this.subMet = subMet;
-            mark = new int[dom.n];
-            queue = new int[dom.n];
-        }
-
-        void compute(int a, int b) {
-            boolean ra = dom.isReachable(a), rb = dom.isReachable(b);
-            if (!ra && !rb) {
-                services = meters = 0;
-            } else if (!rb || (ra && dom.dominates(a, b))) {
-                services = subSvc[a];
-                meters = subMet[a];
-            } else if (!ra || dom.dominates(b, a)) {
-                services = subSvc[b];
-                meters = subMet[b];
-            } else {
-                int c = dom.nearestCommonDominator(a, b);
-                survivorsFrom(c, a, b);
-                services = subSvc[c] - services;
-                meters = subMet[c] - meters;
-            }
-        }
-
-        /** Sums (into services/meters) of the nodes reached from c inside c's subtree avoiding a and b. */
-        private void survivorsFrom(int c, int a, int b) {
-            epoch++;
-            services = meters = 0;
-            int head = 0, tail = 0;
-            queue[tail++] = c;
-            mark[c] = epoch;
-            mark[a] = epoch;
-            mark[b] = epoch;
-            while (head < tail) {
-                int v = queue[head++];
-                services += svc[v];
-                meters += met[v];
-                for (int i = start[v]; i < start[v + 1]; i++) {
-                    int w = succ[i];
-                    if (mark[w] == epoch || !dom.isReachable(w) || !dom.dominates(c, w)) continue;
-                    mark[w] = epoch;
-                    queue[tail++] = w;
-                }
-            }
-        }
     }
 
     public ValveSegments segments() { return segs; }

@@ -74,6 +74,7 @@ class OutageTablesTest {
         TestNet t = RandomNet.build(seed);
         ValveSegments vs = ValveSegments.build(t.state());
         OutageTables tab = OutageTables.build(vs);
+        OutageTables subtreeBfs = OutageTables.buildWithoutLocalPairs(vs);
         BruteForceOutages brute = new BruteForceOutages(vs);
         for (int s = 0; s < vs.segmentCount(); s++) {
             assertThat(tab.servicesOffWhenIsolated(s)).as("seed %d segment %d services", seed, s)
@@ -92,6 +93,8 @@ class OutageTablesTest {
                     .isEqualTo(brute.servicesOffWhenFails(v));
             assertThat(tab.metersOffWhenFails(v)).as("seed %d valve %d meters", seed, v)
                     .isEqualTo(brute.metersOffWhenFails(v));
+            assertThat(subtreeBfs.servicesOffWhenFails(v)).as("seed %d valve %d (subtree BFS)", seed, v)
+                    .isEqualTo(brute.servicesOffWhenFails(v));
         }
     }
 }
