@@ -23,20 +23,22 @@ import org.shutline.trace.ValveSegments;
  *     a path from a source avoiding u): the sum over u's dominator subtree;</li>
  * <li>a station out puts off its station node's subtree;</li>
  * <li>valve v between units a and b failing to close turns the region a (or b) into
- *     a+b. When one dominates the other, the answer is the dominator's subtree. Else
- *     the nodes lost are those every source path reaches only through a or b; they
- *     all lie in the subtree of c, the nearest common dominator of a and b (a path that
- *     avoids c cannot reach a or b, and edges enter c's subtree only at c), so a BFS
- *     from c inside c's subtree avoiding a and b finds the survivors exactly.</li>
+ *     a+b. When one dominates the other, the answer is the dominator's subtree. Else it
+ *     is computed exactly by {@link PairCut}: the two subtrees plus the nodes every
+ *     source path reaches only through a or b, found by a local search (forward from the
+ *     two subtrees over lost nodes only, each candidate decided by a backward search
+ *     that stops at a node whose path in a BFS spanning tree avoids a and b), capped and
+ *     falling back to a BFS inside the subtree of their nearest common dominator.</li>
  * </ul>
  * Only units fed in the state count (unfed ones belong to no subtree).
  *
  * <p>Cost. Units and graph O(segments + links) with near-constant union-find; the
  * dominator tree O(N + E) per pass, a few passes; subtree sums O(N). Per valve: O(1) when
- * one side dominates the other, else O(size of c's subtree and its arcs): worst case
- * O(N + E) per such valve (a ring fed from one source, where c is the source), so the
- * valve table is O(V (N + E)) in the worst case and proportional to the local subtrees
- * in the usual tree-like distribution layouts. {@link BruteForceOutages} is the plain
+ * one side dominates the other; else typically O(|sub(a)| + |sub(b)| and their arcs) in
+ * meshed layouts, never more than O(size of the common dominator's subtree and its
+ * arcs), so the valve table is O(V (N + E)) in the worst case. Measured on a 200 x 200
+ * grid (151 414 nodes, 55 707 valves): all tables in about 0.14 s against about 53 s for
+ * the brute force (docs/engine.md). {@link BruteForceOutages} is the plain
  * per-case reference.
  */
 public final class OutageTables {
