@@ -66,7 +66,8 @@ public final class Isolation {
             Objects.requireNonNull(inspectionInterval, "inspectionInterval");
         }
 
-        public static Options asOf(LocalDate date) {
+        /** The 15-month interval, never-checked valves overdue, checks measured at {@code date}. */
+        public static Options defaults(LocalDate date) {
             return new Options(date, DEFAULT_INSPECTION_INTERVAL, true);
         }
     }
@@ -141,6 +142,11 @@ public final class Isolation {
         this.options = options;
         this.before = sg.reachFromSources(null, null);
         this.hops = hopsFromSources();
+    }
+
+    /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
+    public static Isolation of(NetworkState state, Options options) {
+        return new Isolation(ValveSegments.build(state), options);
     }
 
     /** Segments fed in the state before any closing. */

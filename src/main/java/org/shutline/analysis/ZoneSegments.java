@@ -2,17 +2,14 @@ package org.shutline.analysis;
 
 import java.util.BitSet;
 import java.util.HashSet;
-import java.util.List;
 import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Point;
-import org.locationtech.jts.linearref.LengthIndexedLine;
-import org.shutline.model.Main;
+import org.shutline.trace.EdgeGeometry;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
-import org.shutline.topology.EdgeKind;
 
 /**
  * Turns a {@link Zone} into the set of valve segments it touches. Point and polygon
@@ -71,19 +68,7 @@ final class ZoneSegments {
         return bestEdge;
     }
 
-    /** The line of one pipe edge: the piece of its main's part between m0 and m1, or the straight node-to-node line. */
     static Geometry edgeLine(NetworkState s, int e) {
-        if (s.edgeKind(e) != EdgeKind.PIPE) throw new IllegalArgumentException("not a pipe edge: " + e);
-        int main = s.edgeFeature(e);
-        List<Main> mains = s.network().mains();
-        if (main < mains.size()) {
-            Geometry g = mains.get(main).geometry();
-            if (g != null && s.edgePart(e) < g.getNumGeometries()) {
-                return new LengthIndexedLine(g.getGeometryN(s.edgePart(e))).extractLine(s.edgeM0(e), s.edgeM1(e));
-            }
-        }
-        int a = s.edgeFrom(e), b = s.edgeTo(e);
-        return GF.createLineString(new Coordinate[] {
-            new Coordinate(s.nodeX(a), s.nodeY(a)), new Coordinate(s.nodeX(b), s.nodeY(b))});
+        return EdgeGeometry.line(s, e);
     }
 }
