@@ -134,6 +134,8 @@ public final class Isolation {
     private final Options options;
     private final BitSet before;
     private final int[] hops;
+    /** Built on the first point or polygon zone, then reused. */
+    private EdgeIndex index;
 
     public Isolation(ValveSegments segments, Options options) {
         this.segs = segments;
@@ -155,7 +157,8 @@ public final class Isolation {
     }
 
     public Result isolate(Zone zone) {
-        BitSet zoneSegs = ZoneSegments.of(zone, segs);
+        if (index == null && !(zone instanceof Zone.OfSegments) && !(zone instanceof Zone.OfMains)) index = new EdgeIndex(segs);
+        BitSet zoneSegs = ZoneSegments.of(zone, segs, index);
         Core core = core(zoneSegs);
         List<Fallback> fallbacks = new ArrayList<>();
         Alternative alt = null;

@@ -13,8 +13,8 @@ import org.shutline.trace.ValveSegments;
 
 /**
  * Turns a {@link Zone} into the set of valve segments it touches. Point and polygon
- * zones read main geometry (base mains only: mains added by a plan step have none), so
- * they cost O(mains) geometry tests; main zones scan the state's edges, O(edges).
+ * zones use an {@link EdgeIndex} when one is given (O(log E + k)), else test every
+ * edge (O(E)); main zones scan the state's edges, O(E).
  */
 final class ZoneSegments {
     private static final GeometryFactory GF = new GeometryFactory();
@@ -22,6 +22,11 @@ final class ZoneSegments {
     private ZoneSegments() {}
 
     static BitSet of(Zone zone, ValveSegments segs) {
+        return of(zone, segs, null);
+    }
+
+    /** With a prebuilt edge index of the same segments (may be null): point and polygon zones then use it. */
+    static BitSet of(Zone zone, ValveSegments segs, EdgeIndex index) {
         NetworkState s = segs.state();
         BitSet out = new BitSet(segs.segmentCount());
         if (zone instanceof Zone.OfSegments z) {
@@ -34,6 +39,10 @@ final class ZoneSegments {
             for (int e = 0; e < s.edgeCount(); e++) {
                 if (segs.edgeSegment(e) >= 0 && ids.contains(s.mainId(s.edgeFeature(e)))) out.set(segs.edgeSegment(e));
             }
+        } else if (zone instanceof Zone.InPolygon z && index != null) {
+            for (int e : index.query(z.polygon().getEnvelopeInternal())) {
+                if (!out.get(segs.edgeSegment(e)) && edgeLine(s, e).intersects(z.polygon())) out.set(segs.edgeSegment(e));
+            }
         } else if (zone instanceof Zone.InPolygon z) {
             for (int e = 0; e < s.edgeCount(); e++) {
                 if (segs.edgeSegment(e) >= 0 && !out.get(segs.edgeSegment(e)) && edgeLine(s, e).intersects(z.polygon())) {
@@ -41,7 +50,7 @@ final class ZoneSegments {
                 }
             }
         } else if (zone instanceof Zone.AtPoint z) {
-            int e = nearestEdge(s, segs, z);
+            int e = index != null ? index.nearest(z.x(), z.y(), z.systemId()) : nearestEdge(s, segs, z);
             if (e >= 0) out.set(segs.edgeSegment(e));
         }
         return out;

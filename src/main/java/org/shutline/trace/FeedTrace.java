@@ -101,6 +101,16 @@ public final class FeedTrace {
         }
     }
 
+    /**
+     * Only which services have gas: one search from the sources through live pipe, open
+     * valves and in-service stations, O(nodes + edges), without the per-station
+     * attribution of {@link #run}. For what-if checks that need no more.
+     */
+    public static BitSet fedServices(NetworkState s) {
+        Flow flow = new Flow(s, Progress.NONE);
+        return flow.fedServices(flow.reach(flow.sourceNodes(), -1));
+    }
+
     public static Result run(NetworkState s) {
         return run(s, Progress.NONE);
     }
