@@ -60,7 +60,7 @@ class CommandsTest {
         Path gpkg = dir.resolve("town.gpkg");
         Run g = run("generate", gpkg.toString());
         assertThat(g.code()).isZero();
-        assertThat(g.out()).contains("4 stations", "61 valves");
+        assertThat(g.out()).contains("4 stations", "55 valves");
         assertThat(Files.size(gpkg)).isGreaterThan(100_000);
         Path shp = dir.resolve("town-shp");
         assertThat(run("generate", shp.toString()).code()).isZero();

@@ -299,19 +299,32 @@ public final class SampleTown {
         valves.add(new Valve(nextValveId(), sys, kind, NormalPosition.OPEN, op, checked, at));
     }
 
+    /**
+     * Valves of the low-pressure grids, placed as a utility valves a grid: on every main
+     * that crosses a valve line, 30 m from the main's start, so that closing the valves of
+     * one line parts the grid into valve zones. LP-SOUTH: a line between Cooper Street and
+     * Weir Lane (the cast-iron main's own valve V-CI-E serves on Elder Street) and one
+     * between Cedar Walk and Damson Road: four zones. LP-NORTH: lines between Weir Lane
+     * and Forge Road and between Ropewalk and Thatcher Lane: three zones, ST-N1 in the
+     * west, ST-N2 in the east. LP-EAST: a line between Cedar Walk and Damson Road: two
+     * zones, ST-E1 in the south. Two valves in LP-NORTH are normally closed.
+     */
     private void lpValves() {
-        List<int[]> candidates = new ArrayList<>(serviceMains);
-        int placed = 0;
-        for (int j = 0; j < candidates.size() && placed < 36; j++) {
-            int[] m = candidates.get((j * 37) % candidates.size());
-            Main main = mains.get(m[0]);
-            if (main.id().equals(CROSSING_MAIN) || main.id().equals(NEAR_MISS_MAIN)) continue;
-            valve(ValveKind.MAIN, main.systemId(), along(main, 8 + rnd.nextInt(5)));
-            placed++;
+        for (int r = 0; r <= 5; r++) if (r != 4) cutValve(lp(4, r), lp(5, r));
+        for (int c = 0; c <= 9; c++) cutValve(lp(c, 2), lp(c, 3));
+        for (int r = 7; r <= 11; r++) {
+            cutValve(lp(5, r), lp(6, r));
+            cutValve(lp(10, r), lp(11, r));
         }
-        // two normally closed valves in LP-NORTH
-        closeValve(nearestValve("LP-NORTH", lp(7, 9)));
-        closeValve(nearestValve("LP-NORTH", lp(8, 10)));
+        for (int c = 11; c <= 15; c++) cutValve(lp(c, 2), lp(c, 3));
+        // two normally closed valves in LP-NORTH, on the eastern valve line
+        closeValve(nearestValve("LP-NORTH", lp(10, 9)));
+        closeValve(nearestValve("LP-NORTH", lp(10, 11)));
+    }
+
+    private void cutValve(Coordinate a, Coordinate b) {
+        Main main = mains.get(mainAt(a, b));
+        valve(ValveKind.MAIN, main.systemId(), along(main, 30));
     }
 
     /**
