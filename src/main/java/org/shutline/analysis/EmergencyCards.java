@@ -32,7 +32,9 @@ import org.shutline.trace.ValveSegments;
  *     radius {@code pitRadiusM} (the segments of every active pipe edge crossing the
  *     circle, both sides of a cut included); a phase without work points takes the
  *     mains its steps name (cut, tie-in, activate, abandon, transfer, move tap). A
- *     phase that touches no pipe has no site ({@code site} empty);</li>
+ *     phase that touches no pipe, or whose pits reach no active pipe in that state (a
+ *     cut main since abandoned), has no site ({@code site} null, said in the site
+ *     description);</li>
  * <li>an over-pressure of each pressure system the phase touches (the systems of the
  *     mains, valves and tap moves it names, and the outlet systems of stations it stops,
  *     starts or re-taps): the {@link OverpressureShutoff} of that system.</li>
@@ -83,8 +85,9 @@ public final class EmergencyCards {
                     z.or(ZoneSegments.of(new Zone.InPolygon(circle(wp.x(), wp.y(), r)), segs));
                     names.add(String.format(java.util.Locale.ROOT, "%s on %s at (%.1f, %.1f)", wp.kind(), wp.mainId(), wp.x(), wp.y()));
                 }
-                zone = new Zone.OfSegments(z.stream().toArray());
                 where = String.join("; ", names);
+                if (z.isEmpty()) where += " (no active pipe within " + pitRadiusM + " m in this state: nothing to isolate)";
+                else zone = new Zone.OfSegments(z.stream().toArray());
             } else if (!mains.isEmpty()) {
                 zone = new Zone.OfMains(List.copyOf(mains));
                 where = "mains " + String.join(", ", mains);

@@ -24,7 +24,8 @@ import org.shutline.trace.ValveSegments;
  *     (kind {@code station}, on the station's inlet system, within the point tolerance
  *     of the station: the rule {@link Isolation} uses) and, as the upstream fallback
  *     when an inlet valve will not close or there is none, the {@link Isolation} of the
- *     station's inlet segment (its valves, their own fallbacks, what it adds); and every
+ *     station's inlet segment grown across its inlet valves (as if they will not close:
+ *     the valves beyond them, their own fallbacks, what it adds); and every
  *     source on the system's pipe (the supply must be shut there).</li>
  * <li>At risk: every service on the system's pipe fed in the state (the normal state
  *     when given the base state), critical customers first; every one of them is to be
@@ -84,8 +85,9 @@ public final class OverpressureShutoff {
             int l = sg.stationLink(st);
             if (l < 0 || !sg.isOpen(l) || !onSystem.get(sg.linkB(l)) || onSystem.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
             Station station = net.stations().get(st);
-            Isolation.Result up = iso.isolate(new Zone.OfSegments(new int[] {sg.linkA(l)}));
-            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), inletValves(s, station), up));
+            List<String> inlet = inletValves(s, station);
+            Isolation.Result up = iso.isolate(new Zone.OfSegments(upstreamSeed(s, sg, sg.linkA(l), inlet)));
+            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), inlet, up));
         }
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
@@ -111,6 +113,19 @@ public final class OverpressureShutoff {
         Restoration.Result r = Restoration.of(segs, before, after, off, settings);
         return new Result(systemId, feeds, atRisk, ordered, Restoration.meters(all, atRisk), critical, off,
                 Restoration.meters(all, off), r);
+    }
+
+    /** The station's inlet segment and both sides of each of its inlet valves (the region if they will not close). */
+    private static int[] upstreamSeed(NetworkState s, SegmentGraph sg, int inletSegment, List<String> inletValves) {
+        BitSet seed = new BitSet(sg.segmentCount());
+        seed.set(inletSegment);
+        for (int v = 0; v < s.valveCount(); v++) {
+            int l = sg.valveLink(v);
+            if (l < 0 || !inletValves.contains(s.valveId(v))) continue;
+            seed.set(sg.linkA(l));
+            seed.set(sg.linkB(l));
+        }
+        return seed.stream().toArray();
     }
 
     /** Valves of kind station on the station's inlet system within the point tolerance of it (as {@link Isolation}). */
