@@ -24,11 +24,13 @@ import org.shutline.model.Service;
  * sheet and ordered along streets.
  *
  * <ul>
- * <li>Street of a service: the nearest line of the context layer {@code streets} (any
- *     case) that has a {@code name} attribute (any case), by an STR-tree nearest
- *     neighbour search; position along it: the service point projected on that line
- *     ({@link LengthIndexedLine#project}). A network without such a layer gives every
- *     service the street "" and position 0.</li>
+ * <li>Street of a service: when its address contains the name of a street of the
+ *     context layer {@code streets} (any case; the longest such name), the nearest line
+ *     of that name, so that a corner lot is listed on the street of its address; else
+ *     the nearest line of the layer that has a {@code name} attribute (any case), by an
+ *     STR-tree nearest neighbour search. Position along it: the service point projected
+ *     on that line ({@link LengthIndexedLine#project}). A network without such a layer
+ *     gives every service the street "" and position 0.</li>
  * <li>Order within a list: street name (case-insensitive), then the street line (in
  *     layer order), then position along it, then service id.</li>
  * <li>Packages: first one package of the critical customers (sheet {@link #CRITICAL}),
@@ -38,7 +40,8 @@ import org.shutline.model.Service;
  *     first, each to the crew with the fewest meters so far (lowest number on a tie):
  *     the longest-processing-time rule of list scheduling (Graham, 1969).</li>
  * </ul>
- * Cost O(s log s + s log L) for s services and L street lines.
+ * Cost O(s log s + s log L) for s services and L street lines, plus O(s N) address
+ * matching for N distinct street names.
  */
 public final class WorkPackages {
     /** The sheet of the critical customers' package. */
@@ -79,13 +82,16 @@ public final class WorkPackages {
 
     private record Street(String name, int index, Geometry line) {}
 
+    /** Named street lines: an STR-tree of all, and the lines of each name (lower case). */
+    private record Streets(STRtree tree, Map<String, List<Street>> byName) {}
+
     private record Keyed(Visit visit, int streetIndex, String sheet) {}
 
     private WorkPackages() {}
 
     public static Result build(Network net, BitSet services, SheetKey key, int crews) {
         if (crews < 1) throw new IllegalArgumentException("crews must be at least 1");
-        STRtree tree = streets(net);
+        Streets tree = streets(net);
         List<Keyed> critical = new ArrayList<>();
         Map<String, List<Keyed>> bySheet = new TreeMap<>();
         List<Service> all = net.services();
@@ -132,7 +138,7 @@ public final class WorkPackages {
         return new Package(sheet, visits, m, crew);
     }
 
-    private static Keyed keyed(Service sv, STRtree tree, SheetKey key) {
+    private static Keyed keyed(Service sv, Streets tree, SheetKey key) {
         Point p = sv.geometry();
         String critical = sv.isCritical() ? (sv.critical() == null || sv.critical().isBlank() ? "critical" : sv.critical()) : "";
         if (p == null || p.isEmpty()) {
@@ -142,7 +148,8 @@ public final class WorkPackages {
         double along = 0;
         int idx = Integer.MAX_VALUE;
         if (tree != null) {
-            Street st = (Street) tree.nearestNeighbour(p.getEnvelopeInternal(), p, DISTANCE);
+            Street st = byAddress(tree, sv.address(), p);
+            if (st == null) st = (Street) tree.tree().nearestNeighbour(p.getEnvelopeInternal(), p, DISTANCE);
             if (st != null) {
                 street = st.name();
                 idx = st.index();
@@ -158,9 +165,31 @@ public final class WorkPackages {
         return ga.distance(gb);
     };
 
-    /** STR-tree of named street lines, or null when the network has none. */
-    private static STRtree streets(Network net) {
+    /** The nearest line of the longest street name the address contains, or null. */
+    private static Street byAddress(Streets streets, String address, Point p) {
+        if (address == null || address.isBlank()) return null;
+        String a = address.toLowerCase(Locale.ROOT);
+        String best = null;
+        for (String name : streets.byName().keySet()) {
+            if (a.contains(name) && (best == null || name.length() > best.length())) best = name;
+        }
+        if (best == null) return null;
+        Street near = null;
+        double d = Double.POSITIVE_INFINITY;
+        for (Street s : streets.byName().get(best)) {
+            double x = s.line().distance(p);
+            if (x < d) {
+                d = x;
+                near = s;
+            }
+        }
+        return near;
+    }
+
+    /** Named street lines, or null when the network has none. */
+    private static Streets streets(Network net) {
         STRtree tree = null;
+        Map<String, List<Street>> byName = new HashMap<>();
         int index = 0;
         for (ContextLayer layer : net.context()) {
             if (!layer.name().equalsIgnoreCase("streets")) continue;
@@ -169,10 +198,12 @@ public final class WorkPackages {
                 Geometry g = item.geometry();
                 if (name == null || g == null || g.isEmpty() || g.getDimension() != 1) continue;
                 if (tree == null) tree = new STRtree();
-                tree.insert(g.getEnvelopeInternal(), new Street(name, index++, g));
+                Street st = new Street(name, index++, g);
+                tree.insert(g.getEnvelopeInternal(), st);
+                byName.computeIfAbsent(name.toLowerCase(Locale.ROOT), k -> new ArrayList<>()).add(st);
             }
         }
-        return tree;
+        return tree == null ? null : new Streets(tree, byName);
     }
 
     private static String nameOf(ContextLayer.Item item) {

@@ -107,7 +107,7 @@ public final class CardsCommand implements Callable<Integer> {
             for (EmergencyCards.Card c : cards) {
                 sheets.addAll(TableSheets.layout("Emergency card: phase " + (c.phase() + 1) + " " + c.name(),
                         ps.plan().project() + " | " + t.network().sourceName() + " | state after the phase's steps",
-                        List.of("item", "detail"), wrap(rows(t.network(), ps, c, grid), 78), pf));
+                        List.of("item", "detail"), wrap(rows(t.network(), ps, c, grid), 54), pf));
             }
             try {
                 DocumentExport.pdf(sheets, pf, new DocumentExport.Info("Emergency cards: " + ps.plan().project(),

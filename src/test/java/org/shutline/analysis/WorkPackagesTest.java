@@ -54,6 +54,27 @@ class WorkPackagesTest {
         assertThat(r.ofCrew(1)).extracting(WorkPackages.Package::sheet).containsExactly(WorkPackages.CRITICAL, "W");
     }
 
+    /* s4 at (60,-30) is nearest West Lane, but its address names North Row: it is listed there. */
+    @Test
+    void theStreetOfTheAddressWinsOverTheNearestStreet() {
+        TestNet t = AsciiNet.parse(IsolationTest.RING);
+        Network base = t.network();
+        List<org.shutline.model.Service> svcs = new java.util.ArrayList<>(base.services());
+        org.shutline.model.Service s4 = svcs.get(t.service("s4"));
+        svcs.set(t.service("s4"), new org.shutline.model.Service(s4.id(), s4.systemId(), s4.serviceClass(), s4.meters(), s4.critical(),
+                s4.mainId(), "7 NORTH ROW", s4.geometry()));
+        ContextLayer streets = new ContextLayer("streets", List.of(street("North Row", -10, 5, 130, 5), street("West Lane", 65, -50, 65, 0)));
+        Network net = new Network(base.sourceName(), base.crs(), base.mains(), base.valves(), base.stations(), base.taps(),
+                svcs, base.sources(), List.of(streets), base.readFindings());
+        BitSet one = new BitSet();
+        one.set(t.service("s4"));
+        one.set(t.service("s2"));
+        WorkPackages.Visit v = WorkPackages.build(net, one, WorkPackages.SheetKey.NONE, 1).packages().get(0).visits().get(1);
+        assertThat(v.serviceId()).isEqualTo("s4");
+        assertThat(v.street()).isEqualTo("North Row");
+        assertThat(v.along()).isEqualTo(70.0); // projected at x = 60, 70 m from the west end at -10
+    }
+
     @Test
     void withoutStreetsOrSheetsEveryoneIsOnOneListInIdOrder() {
         TestNet t = AsciiNet.parse(IsolationTest.RING);
