@@ -70,6 +70,8 @@ public final class RiskTables {
     private final List<StationRow> stationRows;
     private final List<ValveRow> valveRows;
     private final int[][] edgesBySegment;
+    /** Pressure system of each segment's pipe (-1 for an empty segment), computed once. */
+    private final int[] segSystem;
 
     private RiskTables(ValveSegments segs, Progress progress) {
         this.segs = segs;
@@ -87,6 +89,8 @@ public final class RiskTables {
             for (int sv : segs.services(seg)) if (services.get(sv).isCritical()) crit[1 + tables.unitOf(seg)]++;
         }
         long[] subCrit = dom.subtreeSums(crit);
+        segSystem = new int[segs.segmentCount()];
+        for (int seg = 0; seg < segSystem.length; seg++) segSystem[seg] = Restoration.segmentSystem(segs, seg);
         int[] valveCount = new int[units];
         boolean[] notIsolable = new boolean[units];
         for (int l = 0; l < sg.linkCount(); l++) {
@@ -102,7 +106,7 @@ public final class RiskTables {
         }
         for (int i = 0; i < sg.sourceCount(); i++) if (sg.sourceSegment(i) >= 0) notIsolable[tables.unitOf(sg.sourceSegment(i))] = true;
         progress.checkCancelled();
-        segmentRows = segmentRows(s, dom, subCrit, valveCount, notIsolable);
+        segmentRows = segmentRows(s, dom, subCrit, valveCount, notIsolable, progress);
         stationRows = stationRows(s, dom, subCrit, units);
         valveRows = valveRows(s);
         int[] edgeSeg = new int[s.edgeCount()];
@@ -124,15 +128,16 @@ public final class RiskTables {
         return !dom.isReachable(unit) || !dom.dominates(unit, far);
     }
 
-    private List<SegmentRow> segmentRows(NetworkState s, Dominators dom, long[] subCrit, int[] valveCount, boolean[] notIsolable) {
+    private List<SegmentRow> segmentRows(NetworkState s, Dominators dom, long[] subCrit, int[] valveCount, boolean[] notIsolable,
+                                         Progress progress) {
         List<SegmentRow> rows = new ArrayList<>();
         for (int seg = 0; seg < segs.segmentCount(); seg++) {
             if (segs.isEmpty(seg)) continue;
             int u = tables.unitOf(seg);
             List<String> mains = new ArrayList<>();
             for (int m : segs.mains(seg)) mains.add(s.mainId(m));
-            int sys = Restoration.segmentSystem(segs, seg);
-            rows.add(new SegmentRow(seg, s.graph().systemId(sys), mains, segs.serviceCount(seg), tables.servicesOffWhenIsolated(seg),
+            if ((seg & 0xFFF) == 0) progress.checkCancelled();
+            rows.add(new SegmentRow(seg, s.graph().systemId(segSystem[seg]), mains, segs.serviceCount(seg), tables.servicesOffWhenIsolated(seg),
                     tables.metersOffWhenIsolated(seg), dom.isReachable(1 + u) ? subCrit[1 + u] : 0, valveCount[u], !notIsolable[u]));
         }
         rows.sort(Comparator.comparingLong(SegmentRow::servicesOff).reversed().thenComparingLong(r -> -r.metersOff())
@@ -167,12 +172,11 @@ public final class RiskTables {
         for (long[] a : order) {
             int v = (int) a[0];
             int e = s.valveEdge(v);
-            int main = -1;
             String sys = "";
             if (e >= 0) {
                 int seg = segs.nodeSegment(s.edgeFrom(e));
-                int sy = seg >= 0 ? Restoration.segmentSystem(segs, seg) : -1;
-                if (sy < 0 && segs.nodeSegment(s.edgeTo(e)) >= 0) sy = Restoration.segmentSystem(segs, segs.nodeSegment(s.edgeTo(e)));
+                int sy = seg >= 0 ? segSystem[seg] : -1;
+                if (sy < 0 && segs.nodeSegment(s.edgeTo(e)) >= 0) sy = segSystem[segs.nodeSegment(s.edgeTo(e))];
                 if (sy >= 0) sys = s.graph().systemId(sy);
             }
             rows.add(new ValveRow(rank++, s.valveId(v), sys, s.valveOperability(v).name().toLowerCase(java.util.Locale.ROOT), a[1],
