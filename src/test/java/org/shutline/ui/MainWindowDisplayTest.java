@@ -25,8 +25,11 @@ import javax.swing.JTextArea;
 import javax.swing.ListModel;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestMethodOrder;
 
 /**
  * The real window on a display (run under {@code xvfb-run -a mvn -B verify -Pdisplay}):
@@ -38,6 +41,7 @@ import org.junit.jupiter.api.Test;
  * writes the window with the hazard step selected to PATH.
  */
 @Tag("display")
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class MainWindowDisplayTest {
     private static MainWindow win;
     private static EdtWatch watch;
@@ -71,6 +75,7 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(1)
     void theHazardStepShowsServicesOffTheHazardAndTheCaution() throws Exception {
         // warm-up: class loading, JIT and the first paint of each step (as after a minute of use);
         // from then on the event thread must stay responsive
@@ -90,24 +95,24 @@ class MainWindowDisplayTest {
         });
         waitFor("map drawn", () -> win.map().isSettled());
         String summary = onEdt(() -> ((JLabel) find(win, "planSummary")).getText());
-        assertThat(summary).contains("Step 3: 5 services off, 7 meters off, 1 critical customers off");
+        // abandoning M-CI-01 without transferring its services takes off exactly the services attached to it
+        var ws = win.workspace();
+        int ci = ws.mainIndex("M-CI-01");
+        int attached = 0;
+        long meters = 0;
+        for (int s = 0; s < ws.base().serviceCount(); s++) {
+            int e = ws.base().serviceEdge(s);
+            if (e >= 0 && ws.base().edgeFeature(e) == ci) {
+                attached++;
+                meters += ws.network().services().get(s).meters();
+            }
+        }
+        assertThat(attached).isPositive();
+        assertThat(summary).contains("Step 3: " + attached + " services off, " + meters + " meters off, 1 critical customers off");
         List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
         assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL tap-on-dead-main") && h.contains("T-S1-W"));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
         assertThat(onEdt(() -> win.map().overlays().hazards())).anyMatch(h -> h.text().equals("tap-on-dead-main"));
-        if (System.getProperty("shutline.screenshot") != null) {
-            // the picture for docs/screenshot-main.png: the tap on the abandoned main selected, the work area in view
-            onEdt(() -> {
-                win.find("T-S1-W");
-                var t = win.workspace().network().taps().stream().filter(x -> x.id().equals("T-S1-W")).findFirst().orElseThrow();
-                var g = t.geometry();
-                win.map().zoomTo(new org.locationtech.jts.geom.Envelope(g.getX() - 260, g.getX() + 260, g.getY() - 200, g.getY() + 200), 400);
-                return null;
-            });
-            waitFor("map drawn", () -> win.map().isSettled());
-            Thread.sleep(300);
-            screenshotIfAsked();
-        }
         // next step with the keyboard shortcut's action: back to step 2, nothing off
         onEdt(() -> {
             win.stepBy(-1);
@@ -119,6 +124,7 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(2)
     void editingThePlanReEvaluatesShowsErrorsAndSavesARoundTrippingFile() throws Exception {
         // abandon M-CI-01 a second time, after step 3: the applier refuses, the error line says so
         onEdt(() -> {
@@ -129,7 +135,7 @@ class MainWindowDisplayTest {
         });
         waitFor("error shown", () -> win.planPanel().errorText().startsWith("elder-street-plan.yaml:"));
         assertThat(onEdt(() -> win.planPanel().errorText())).contains("step 4");
-        // remove it again; close V-016's neighbour instead: pick valve V-001 and add a close step
+        // remove it again; add a close step for an open valve instead: pick valve V-001 and add a close step
         onEdt(() -> {
             win.planPanel().removeStep();
             win.find("V-001");
@@ -156,11 +162,12 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(3)
     void clickingAValveWithTheMouseShowsItsFacts() throws Exception {
         Robot robot = new Robot();
         robot.setAutoDelay(30);
         var ws = win.workspace();
-        var v = ws.network().valves().get(ws.valveIndex("V-016")).geometry();
+        var v = ws.network().valves().get(ws.valveIndex("V-039")).geometry();
         onEdt(() -> {
             win.map().zoomTo(new org.locationtech.jts.geom.Envelope(v.getX() - 80, v.getX() + 80, v.getY() - 80, v.getY() + 80), 160);
             return null;
@@ -175,11 +182,53 @@ class MainWindowDisplayTest {
         robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
         robot.mouseRelease(InputEvent.BUTTON1_DOWN_MASK);
         robot.waitForIdle();
-        waitFor("facts shown", () -> ((JTextArea) find(win, "facts")).getText().startsWith("valve V-016"));
+        waitFor("facts shown", () -> ((JTextArea) find(win, "facts")).getText().startsWith("valve V-039"));
         String facts = onEdt(() -> ((JTextArea) find(win, "facts")).getText());
         assertThat(facts).contains("normal: closed", "valve segment #", "valves bounding it: ");
         assertThat(onEdt(() -> ((JLabel) find(win, "coords")).getText())).startsWith("E ");
         assertThat(onEdt(() -> ((JLabel) find(win, "gridRef")).getText())).startsWith("15T");
+    }
+
+    @Test
+    @Order(4)
+    void theBundledSamplePlanShowsItsCriticalHazardStep() throws Exception {
+        Path samplePlan = Path.of("sample-gis/tallowmere-plan.yaml");
+        org.junit.jupiter.api.Assumptions.assumeTrue(java.nio.file.Files.exists(samplePlan), "no sample plan in sample-gis: skipped");
+        Path copy = planCopy.resolveSibling("tallowmere-plan.yaml");
+        java.nio.file.Files.copy(samplePlan, copy, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        var plan = org.shutline.plan.PlanReader.read(copy);
+        onEdt(() -> {
+            win.planPanel().open(plan, copy);
+            return null;
+        });
+        waitFor("plan evaluated", () -> win.planPanel().result() != null && win.planPanel().result().steps().size() == plan.steps().size());
+        int hazardStep = onEdt(() -> {
+            var steps = win.planPanel().result().steps();
+            for (int i = 0; i < steps.size(); i++) if (steps.get(i).hasCritical()) return i;
+            return -1;
+        });
+        assertThat(hazardStep).as("the sample plan has a step with a critical hazard").isNotNegative();
+        onEdt(() -> {
+            win.planPanel().selectStep(hazardStep);
+            win.find(win.planPanel().result().steps().get(hazardStep).hazards().stream()
+                    .filter(h -> h.severity() == org.shutline.model.Severity.CRITICAL).findFirst().orElseThrow().features().get(0));
+            return null;
+        });
+        List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
+        assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL "));
+        assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
+        if (System.getProperty("shutline.screenshot") != null) {
+            // the picture for docs/screenshot-main.png: the work area in view around the first critical hazard
+            onEdt(() -> {
+                var h = win.planPanel().result().steps().get(hazardStep).hazards().stream()
+                        .filter(x -> x.severity() == org.shutline.model.Severity.CRITICAL).findFirst().orElseThrow();
+                win.map().zoomTo(new org.locationtech.jts.geom.Envelope(h.x() - 260, h.x() + 260, h.y() - 200, h.y() + 200), 400);
+                return null;
+            });
+            waitFor("map drawn", () -> win.map().isSettled());
+            Thread.sleep(300);
+            screenshotIfAsked();
+        }
     }
 
     private static void screenshotIfAsked() throws Exception {

@@ -29,9 +29,9 @@ class MapViewRenderTest {
     @BeforeAll
     static void load() throws Exception {
         ws = SampleWorkspace.get();
-        Valve v016 = valve("V-016");
-        // a 1:2 000-ish view (0.5 m per pixel) around the normally closed valve V-016
-        view = new Viewport(v016.geometry().getX(), v016.geometry().getY(), 0.5, 600, 400);
+        Valve v039 = valve("V-039");
+        // a 1:2 000-ish view (0.5 m per pixel) around the normally closed valve V-039
+        view = new Viewport(v039.geometry().getX(), v039.geometry().getY(), 0.5, 600, 400);
     }
 
     private static Valve valve(String id) {
@@ -54,7 +54,7 @@ class MapViewRenderTest {
     @Test
     void aClosedValveIsAFilledSymbolWhereTheValveIs() {
         BufferedImage img = draw(MapLayers.defaults(List.of("streets")), MapOverlays.NONE, List.of());
-        Point p = valve("V-016").geometry();
+        Point p = valve("V-039").geometry();
         // closed valves are filled with the foreground colour (render/Symbols.valve)
         assertThat(rgbAt(img, p.getX(), p.getY())).isEqualTo(rgb(MapStyle.LIGHT.foreground()));
         // 30 m north of it there is no feature: background
@@ -72,17 +72,17 @@ class MapViewRenderTest {
         int valvesAt = -1;
         for (int i = 0; i < layers.entries().size(); i++) if (layers.entries().get(i).net() == MapLayers.Net.VALVES) valvesAt = i;
         BufferedImage hidden = draw(layers.withVisible(valvesAt, false), MapOverlays.NONE, List.of());
-        Point p = valve("V-016").geometry();
-        // without the valve layer the main under V-016 shows: not the valve fill, not the background
+        Point p = valve("V-039").geometry();
+        // without the valve layer the main under V-039 shows: not the valve fill, not the background
         assertThat(rgbAt(hidden, p.getX(), p.getY())).isNotEqualTo(rgb(MapStyle.LIGHT.foreground()))
                 .isNotEqualTo(rgb(MapStyle.LIGHT.background()));
     }
 
     @Test
     void theSelectionBandIsDrawnAroundAPickedFeature() {
-        Pick pick = Identify.at(ws, valve("V-016").geometry().getX(), valve("V-016").geometry().getY(), 3);
+        Pick pick = Identify.at(ws, valve("V-039").geometry().getX(), valve("V-039").geometry().getY(), 3);
         assertThat(pick).isNotNull();
-        assertThat(pick.id()).isEqualTo("V-016");
+        assertThat(pick.id()).isEqualTo("V-039");
         Point p = pick.feature().geometry().getInteriorPoint();
         MapComposer.Highlight h = new MapComposer.Highlight(List.of(pick.geometry()), new Color(255, 0, 0, 255));
         BufferedImage img = draw(MapLayers.defaults(List.of("streets")), MapOverlays.NONE, List.of(h));
@@ -149,7 +149,7 @@ class MapViewRenderTest {
 
     @Test
     void searchFindsByIdAndAddress() {
-        assertThat(Identify.search(ws, "v-016")).extracting(Pick::id).containsExactly("V-016");
+        assertThat(Identify.search(ws, "v-039")).extracting(Pick::id).containsExactly("V-039");
         assertThat(Identify.search(ws, "Elder Street Care Home")).extracting(Pick::id).contains("SV-C-CARE");
     }
 }

@@ -1,0 +1,243 @@
+package org.shutline.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.shutline.analysis.EmergencyCards;
+import org.shutline.analysis.IncidentResponse;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.OverpressureShutoff;
+import org.shutline.analysis.ResponseSettings;
+import org.shutline.analysis.ValveRoute;
+import org.shutline.io.InputException;
+import org.shutline.model.Caution;
+import org.shutline.model.Network;
+import org.shutline.model.Progress;
+import org.shutline.plan.Plan;
+import org.shutline.plan.PlanApplier;
+import org.shutline.plan.PlanException;
+import org.shutline.plan.PlanReader;
+import org.shutline.plan.PlanStates;
+import org.shutline.report.DocumentExport;
+import org.shutline.report.PageFormat;
+import org.shutline.report.Paper;
+import org.shutline.report.Sheet;
+import org.shutline.report.TableSheets;
+import org.shutline.topology.Topology;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline cards NETWORK PLAN [--out DIR] [--format text|json]}: one emergency card
+ * per phase of a work plan ({@link EmergencyCards}): in the state after the phase, the
+ * valves that stop gas at the work site if gas blows at the excavation (with
+ * fallbacks), and for each pressure system the phase touches the over-pressure
+ * shut-off (station inlet valves, upstream fallback, services at risk). Prints the
+ * cards and writes {@code emergency-cards.pdf} (one text page per phase, the caution at
+ * the foot; map pages are not drawn yet) into DIR. Exit 0, or 2 when the network or
+ * plan cannot be read or the PDF cannot be written.
+ */
+@Command(name = "cards", mixinStandardHelpOptions = true,
+    description = "Emergency cards per plan phase: shut-off at the work site and for over-pressure, for briefings and the fire department.")
+public final class CardsCommand implements Callable<Integer> {
+    enum Format { text, json }
+
+    @Spec private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
+    private Path network;
+
+    @Parameters(index = "1", paramLabel = "PLAN", description = "the work plan (YAML)")
+    private Path planFile;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = ".", description = "folder for emergency-cards.pdf (default: the current folder)")
+    private Path out;
+
+    @Option(names = "--no-pdf", description = "do not write the PDF")
+    private boolean noPdf;
+
+    @Option(names = "--crews", defaultValue = "2", description = "crews for the valve time (default: ${DEFAULT-VALUE})")
+    private int crews;
+
+    @Option(names = "--pit-radius", defaultValue = "2", description = "radius in metres of the excavation around a cut or tie-in point (default: ${DEFAULT-VALUE})")
+    private double pitRadius;
+
+    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
+    private Path mapping;
+
+    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
+    private LocalDate asOf;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    private Format format;
+
+    @Override
+    public Integer call() {
+        PrintWriter o = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        PlanStates ps;
+        Topology t;
+        ResponseSettings settings;
+        try {
+            settings = ResponseSettings.DEFAULT.withCrews(crews);
+            t = NetworkInput.load(network, mapping, Progress.NONE);
+            Plan plan = PlanReader.read(planFile);
+            ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
+        } catch (InputException | PlanException | IllegalArgumentException e) {
+            err.println(e.getMessage());
+            err.flush();
+            return 2;
+        }
+        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
+        List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
+        GridSheets grid = GridSheets.of(t.network().crs());
+        if (!noPdf) {
+            List<Sheet> sheets = new ArrayList<>();
+            PageFormat pf = new PageFormat(Paper.LETTER, false);
+            for (EmergencyCards.Card c : cards) {
+                sheets.addAll(TableSheets.layout("Emergency card: phase " + (c.phase() + 1) + " " + c.name(),
+                        ps.plan().project() + " | " + t.network().sourceName() + " | state after the phase's steps",
+                        List.of("item", "detail"), wrap(rows(t.network(), ps, c, grid), 54), pf));
+            }
+            try {
+                DocumentExport.pdf(sheets, pf, new DocumentExport.Info("Emergency cards: " + ps.plan().project(),
+                        "Shut-off per phase", "Shutline"), out.resolve("emergency-cards.pdf"));
+            } catch (IOException e) {
+                err.println("cards: cannot write " + out.resolve("emergency-cards.pdf") + ": " + e.getMessage());
+                err.flush();
+                return 2;
+            }
+        }
+        o.print(format == Format.json ? Json.write(json(t.network(), ps, cards, grid, settings)) : text(t.network(), ps, cards, grid, settings));
+        o.flush();
+        return 0;
+    }
+
+    /** Long details split at blanks into continuation rows (the table would cut them with an ellipsis). */
+    static List<List<String>> wrap(List<List<String>> rows, int width) {
+        List<List<String>> out = new ArrayList<>();
+        for (List<String> r : rows) {
+            String item = r.get(0), rest = r.get(1);
+            while (rest.length() > width) {
+                int cut = rest.lastIndexOf(' ', width);
+                if (cut <= 0) cut = width;
+                out.add(List.of(item, rest.substring(0, cut).trim()));
+                item = "";
+                rest = rest.substring(cut).trim();
+            }
+            out.add(List.of(item, rest));
+        }
+        return out;
+    }
+
+    /** The card as item/detail rows for the PDF page. */
+    static List<List<String>> rows(Network net, PlanStates ps, EmergencyCards.Card c, GridSheets grid) {
+        List<List<String>> rows = new ArrayList<>();
+        rows.add(List.of("Work site", c.siteDescription()));
+        IncidentResponse.Result site = c.site();
+        if (site != null) {
+            Isolation.Result iso = site.isolation();
+            rows.add(List.of("GAS BLOWING AT THE EXCAVATION", iso.isolable() ? "close these valves in this order" : "NOT isolable by valves alone"));
+            if (!iso.isolable()) rows.add(List.of("  why", iso.reason()));
+            var state = ps.afterPhase(c.phase());
+            for (Isolation.ValveStep v : iso.valves()) {
+                double[] xy = IncidentResponse.valveXY(state, v.valve());
+                rows.add(List.of("  " + v.order() + ". " + v.valveId(), "operable " + v.operable().name().toLowerCase(Locale.ROOT)
+                        + (v.overdue() ? ", past inspection interval" : "") + "; crew " + EmergencyReport.crewOf(site.route(), v.valveId())
+                        + (grid.reference(xy[0], xy[1]).isEmpty() ? "" : "; USNG " + grid.reference(xy[0], xy[1]))));
+            }
+            if (!iso.stationsToStop().isEmpty()) {
+                rows.add(List.of("  stop stations", String.join(", ", iso.stationsToStop()) + " (inlet valves "
+                        + (iso.stationInletValves().isEmpty() ? "none recorded" : String.join(", ", iso.stationInletValves())) + ")"));
+            }
+            for (Isolation.Fallback f : iso.fallbacks()) {
+                rows.add(List.of("  if " + f.valveId() + " will not close", "(" + f.why() + ") close "
+                        + (f.thenClose().isEmpty() ? "nothing more" : String.join(", ", f.thenClose())) + "; adds "
+                        + f.addedServices().size() + " services" + (f.isolable() ? "" : "; valves alone then cannot isolate")));
+            }
+            iso.alternative().ifPresent(a -> rows.add(List.of("  fewer valves", String.join(", ", a.valves()) + " (adds "
+                    + a.addedServices().size() + " services)")));
+            ValveRoute.Result r = site.route();
+            if (!r.crews().isEmpty()) rows.add(List.of("  valve time", String.format(Locale.ROOT, "%.0f min with %d crew(s)", r.elapsedMinutes(), r.crews().size())));
+            rows.add(List.of("  customers off", iso.serviceIdsOff().size() + " services, " + iso.metersOff() + " meters"));
+            if (!site.restoration().criticalShutOff().isEmpty()) rows.add(List.of("  critical off", String.join(", ", site.restoration().criticalShutOff())));
+            rows.add(List.of("  initial isolation", String.format(Locale.ROOT, "%.0f m in all directions (ERG Guide 115); no ignition sources",
+                    IncidentResponse.INITIAL_ISOLATION_M)));
+        }
+        for (OverpressureShutoff.Result op : c.overpressure()) {
+            rows.add(List.of("OVER-PRESSURE OF " + op.systemId(), "stop the inflow"));
+            for (OverpressureShutoff.Feed f : op.feeds()) {
+                if (!f.isStation()) {
+                    rows.add(List.of("  source " + f.id(), "shut the supply at the source"));
+                    continue;
+                }
+                rows.add(List.of("  station " + f.id(), "close inlet valve " + (f.inletValves().isEmpty() ? "(none recorded)" : String.join(", ", f.inletValves()))
+                        + (f.name() == null ? "" : " (" + f.name() + ")")));
+                rows.add(List.of("    if it will not close", "upstream " + (f.upstream().valveIds().isEmpty() ? "(none)" : String.join(", ", f.upstream().valveIds()))
+                        + "; also puts off " + f.upstream().serviceIdsOff().size() + " services"));
+            }
+            rows.add(List.of("  at risk", op.atRisk().cardinality() + " services, " + op.atRiskMeters() + " meters; check each before relight"));
+            if (!op.criticalAtRisk().isEmpty()) rows.add(List.of("  critical at risk", String.join(", ", op.criticalAtRisk())));
+            rows.add(List.of("  off after shut-off", op.off().cardinality() + " services; relight " + op.restoration().metersRelight()
+                    + String.format(Locale.ROOT, " meters (%.0f technician-hours)", op.restoration().sizing().relightTechHours())));
+        }
+        return rows;
+    }
+
+    private static String text(Network net, PlanStates ps, List<EmergencyCards.Card> cards, GridSheets grid, ResponseSettings s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Emergency cards: ").append(ps.plan().project()).append("\nNetwork: ").append(net.sourceName()).append("\n");
+        for (EmergencyCards.Card c : cards) {
+            sb.append("\n=== Phase ").append(c.phase() + 1).append(": ").append(c.name()).append(" (state after the phase) ===\n");
+            sb.append("Work site: ").append(c.siteDescription()).append('\n');
+            if (c.site() != null) {
+                sb.append("If gas blows at the excavation:\n");
+                EmergencyReport.leakText(sb, ps.afterPhase(c.phase()), c.site(), grid);
+            }
+            for (OverpressureShutoff.Result op : c.overpressure()) {
+                sb.append('\n');
+                EmergencyReport.overpressureText(sb, net, op);
+            }
+        }
+        sb.append('\n').append(Caution.TEXT).append('\n');
+        return sb.toString();
+    }
+
+    private static ObjectNode json(Network net, PlanStates ps, List<EmergencyCards.Card> cards, GridSheets grid, ResponseSettings s) {
+        ObjectNode root = Json.object();
+        root.put("project", ps.plan().project());
+        root.put("network", net.sourceName());
+        ArrayNode a = root.putArray("cards");
+        for (EmergencyCards.Card c : cards) {
+            ObjectNode o = a.addObject();
+            o.put("phase", c.phase() + 1);
+            o.put("name", c.name());
+            o.put("work_site", c.siteDescription());
+            o.set("site_mains", Json.strings(c.siteMains()));
+            if (c.site() != null) {
+                ObjectNode site = o.putObject("excavation");
+                EmergencyReport.leakJson(site, ps.afterPhase(c.phase()), c.site(), grid);
+                site.set("response", EmergencyReport.responseJson(c.site().restoration(), s));
+            }
+            ArrayNode ops = o.putArray("overpressure");
+            for (OverpressureShutoff.Result op : c.overpressure()) {
+                ObjectNode x = ops.addObject();
+                EmergencyReport.overpressureJson(x, net, op);
+                x.set("response", EmergencyReport.responseJson(op.restoration(), s));
+            }
+            o.put("caution", c.caution());
+        }
+        root.put("caution", Caution.TEXT);
+        return root;
+    }
+}

@@ -1,0 +1,82 @@
+package org.shutline.cli;
+
+import java.awt.geom.Point2D;
+import java.util.Optional;
+import org.shutline.analysis.WorkPackages;
+import org.shutline.model.CrsInfo;
+import org.shutline.render.GeoTransform;
+import org.shutline.render.GridReference;
+
+/**
+ * US National Grid helpers for the emergency commands: the map sheet of a point (its
+ * 1 km grid square, e.g. "15T VK 12 90"), a point's full reference, and the network
+ * point of a typed reference. A network whose CRS has no transform has one sheet,
+ * "all", and no references.
+ */
+final class GridSheets {
+    private final GeoTransform geo;
+
+    private GridSheets(GeoTransform geo) {
+        this.geo = geo;
+    }
+
+    static GridSheets of(CrsInfo crs) {
+        Optional<GeoTransform> g;
+        try {
+            g = GeoTransform.forCrs(crs);
+        } catch (IllegalArgumentException e) {
+            g = Optional.empty();
+        }
+        return new GridSheets(g.orElse(null));
+    }
+
+    boolean available() {
+        return geo != null;
+    }
+
+    /** The sheet key: the 1 km square of the point, or "all" without a transform. */
+    WorkPackages.SheetKey sheetKey() {
+        if (geo == null) return WorkPackages.SheetKey.NONE;
+        return (x, y) -> {
+            try {
+                return geo.gridReference(x, y).format(GridReference.Precision.KM1);
+            } catch (IllegalArgumentException e) {
+                return "(outside the grid)";
+            }
+        };
+    }
+
+    /** The 1 m reference of a network point, or "" without a transform. */
+    String reference(double x, double y) {
+        if (geo == null || Double.isNaN(x)) return "";
+        try {
+            return geo.gridReference(x, y).format(GridReference.Precision.M1);
+        } catch (IllegalArgumentException e) {
+            return "";
+        }
+    }
+
+    /**
+     * The network point of a typed reference: the centre of the cell it names (a
+     * reference names a cell of 1 m to 10 km by its digit count; its south-west corner
+     * is what the grid library returns, half a cell is added each way).
+     *
+     * @throws IllegalArgumentException when the text is not a reference or the network has no transform
+     */
+    double[] locate(String text) {
+        if (geo == null) throw new IllegalArgumentException("the network's CRS is unknown: grid references cannot be used");
+        GridReference sw = GridReference.parse(text);
+        String compact = text.replaceAll("\\s+", "");
+        int digitsAfterSquare = 0;
+        for (int i = compact.length() - 1; i >= 0 && Character.isDigit(compact.charAt(i)); i--) digitsAfterSquare++;
+        int half = 0;
+        if (digitsAfterSquare > 0 && digitsAfterSquare % 2 == 0 && digitsAfterSquare <= 10) {
+            half = GridReference.Precision.ofDigits(digitsAfterSquare / 2).metres() / 2;
+        }
+        GridReference c = new GridReference(sw.zone(), sw.band(), sw.column(), sw.row(),
+                Math.min(99_999, sw.easting() + half), Math.min(99_999, sw.northing() + half));
+        double[] ll = c.toLonLat();
+        Point2D p = geo.fromLonLat(ll[0], ll[1]);
+        return new double[] {p.getX(), p.getY()};
+    }
+}

@@ -1,0 +1,230 @@
+package org.shutline.cli;
+
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.shutline.analysis.IncidentResponse;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.OverpressureShutoff;
+import org.shutline.analysis.ResponseRates;
+import org.shutline.analysis.ResponseSettings;
+import org.shutline.analysis.Restoration;
+import org.shutline.analysis.ValveRoute;
+import org.shutline.analysis.WorkPackages;
+import org.shutline.analysis.Zone;
+import org.shutline.io.InputException;
+import org.shutline.model.Caution;
+import org.shutline.model.Network;
+import org.shutline.model.Progress;
+import org.shutline.model.Service;
+import org.shutline.topology.Topology;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.ValveSegments;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline incident NETWORK --at X,Y|--main ID|--usng REF|--address TEXT [--kind leak|damage|overpressure]
+ * [--system ID] [--crews N] [--target-hours H] [--format text|json]}: the fastest way to
+ * stop gas at an incident and the size of the shut-off and relight work. A leak or
+ * damage is isolated by valves ({@link IncidentResponse}); an over-pressure is stopped
+ * at the feeds of its pressure system ({@link OverpressureShutoff}: {@code --system},
+ * else the system of the pipe at the place given). Work lists are grouped by 1 km US
+ * National Grid square and ordered along streets. Exit 0 done, 2 bad input (an
+ * ambiguous address lists the candidates). JSON keys: docs/cli-emergency.md.
+ */
+@Command(name = "incident", mixinStandardHelpOptions = true,
+    description = "Emergency response to a leak, damage or over-pressure: valves, crews, customers, shut-off and relight.")
+public final class IncidentCommand implements Callable<Integer> {
+    enum Format { text, json }
+
+    enum Kind { leak, damage, overpressure }
+
+    static final class Where {
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", description = "a point in the network CRS")
+        double[] at;
+
+        @Option(names = "--main", paramLabel = "ID", description = "a main id")
+        String main;
+
+        @Option(names = "--usng", paramLabel = "REF", description = "a US National Grid reference, e.g. \"15T VK 1234 9012\" (the centre of the cell named)")
+        String usng;
+
+        @Option(names = "--address", paramLabel = "TEXT", description = "a service address (case-insensitive)")
+        String address;
+    }
+
+    @Spec private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
+    private Path network;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    private Where where;
+
+    @Option(names = "--kind", defaultValue = "leak", description = "leak, damage or overpressure (default: ${DEFAULT-VALUE})")
+    private Kind kind;
+
+    @Option(names = "--system", paramLabel = "ID", description = "pressure system: with --at or --usng the nearest main of it; for overpressure the system")
+    private String system;
+
+    @Option(names = "--crews", defaultValue = "2", description = "crews available (default: ${DEFAULT-VALUE})")
+    private int crews;
+
+    @Option(names = "--target-hours", defaultValue = "4", description = "hours to finish the shut-off in (default: ${DEFAULT-VALUE})")
+    private double targetHours;
+
+    @Option(names = "--relight-hours", defaultValue = "24", description = "hours to finish the relight in (default: ${DEFAULT-VALUE})")
+    private double relightHours;
+
+    @Option(names = "--valve-minutes", defaultValue = "10", description = "minutes to operate one valve (default: ${DEFAULT-VALUE}, common practice)")
+    private double valveMinutes;
+
+    @Option(names = "--speed", defaultValue = "25", description = "crew driving speed in km/h (default: ${DEFAULT-VALUE}, common practice)")
+    private double speed;
+
+    @Option(names = "--detour", defaultValue = "1.3", description = "road distance / straight-line distance (default: ${DEFAULT-VALUE}, common practice)")
+    private double detour;
+
+    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
+    private Path mapping;
+
+    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
+    private LocalDate asOf;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    private Format format;
+
+    /** Where the incident is: the zone and a point for the work lists and grid reference (NaN when only a main is given). */
+    record Place(Zone zone, double x, double y, String label) {}
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        ResponseSettings settings;
+        try {
+            settings = new ResponseSettings(ResponseRates.DEFAULT, new ValveRoute.Settings(valveMinutes, speed, detour), crews,
+                    targetHours, relightHours);
+        } catch (IllegalArgumentException e) {
+            return fail(err, e.getMessage());
+        }
+        Topology t;
+        try {
+            t = NetworkInput.load(network, mapping, Progress.NONE);
+        } catch (InputException e) {
+            return fail(err, e.getMessage());
+        }
+        Network net = t.network();
+        GridSheets grid = GridSheets.of(net.crs());
+        ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        Place place;
+        try {
+            place = place(net, segs, grid, err);
+        } catch (IllegalArgumentException e) {
+            return fail(err, e.getMessage());
+        }
+        if (place == null) return 2;
+        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
+        ObjectNode root = Json.object();
+        StringBuilder sb = new StringBuilder();
+        root.put("kind", kind.name());
+        root.put("network", net.sourceName());
+        ObjectNode loc = root.putObject("location");
+        loc.put("given", place.label());
+        if (!Double.isNaN(place.x())) {
+            loc.put("x", EmergencyReport.round(place.x(), 2));
+            loc.put("y", EmergencyReport.round(place.y(), 2));
+            loc.put("usng", grid.reference(place.x(), place.y()));
+        }
+        sb.append("Incident: ").append(kind.name()).append(" at ").append(place.label());
+        if (!Double.isNaN(place.x())) {
+            String ref = grid.reference(place.x(), place.y());
+            sb.append(String.format(Locale.ROOT, " (%.1f, %.1f%s)", place.x(), place.y(), ref.isEmpty() ? "" : "; USNG " + ref));
+        }
+        sb.append("\nNetwork: ").append(net.sourceName()).append("\n\n");
+        Restoration.Result rest;
+        java.util.BitSet workSet;
+        if (kind == Kind.overpressure) {
+            String sys = system != null ? system : IncidentResponse.systemOf(segs, place.zone());
+            if (sys == null || t.graph().systemIndex(sys) < 0) {
+                return fail(err, "incident: " + (sys == null ? "no pressure system at the place given" : "no pressure system '" + sys + "'"));
+            }
+            OverpressureShutoff.Result r = OverpressureShutoff.of(segs, options, sys, settings);
+            EmergencyReport.overpressureJson(root, net, r);
+            EmergencyReport.overpressureText(sb, net, r);
+            rest = r.restoration();
+            workSet = r.off();
+        } else {
+            IncidentResponse.Result r = IncidentResponse.leak(segs, options, place.zone(), settings);
+            root.put("system", r.systemId());
+            EmergencyReport.leakJson(root, segs.state(), r, grid);
+            EmergencyReport.leakText(sb, segs.state(), r, grid);
+            rest = r.restoration();
+            workSet = rest.shutOff();
+        }
+        WorkPackages.Result wp = WorkPackages.build(net, workSet, grid.sheetKey(), settings.crews());
+        root.set("response", EmergencyReport.responseJson(rest, settings));
+        root.set("work_packages", EmergencyReport.packagesJson(wp));
+        root.put("caution", Caution.TEXT);
+        sb.append('\n');
+        EmergencyReport.responseText(sb, rest, settings);
+        sb.append('\n');
+        EmergencyReport.packagesText(sb, wp, 8);
+        sb.append('\n').append(Caution.TEXT).append('\n');
+        out.print(format == Format.json ? Json.write(root) : sb.toString());
+        out.flush();
+        return 0;
+    }
+
+    private Place place(Network net, ValveSegments segs, GridSheets grid, PrintWriter err) {
+        if (where.at != null) {
+            if (where.at.length != 2) throw new IllegalArgumentException("incident: --at takes X,Y");
+            return new Place(new Zone.AtPoint(where.at[0], where.at[1], system), where.at[0], where.at[1],
+                    String.format(Locale.ROOT, "point %.1f,%.1f", where.at[0], where.at[1]));
+        }
+        if (where.main != null) {
+            if (net.mains().stream().noneMatch(m -> m.id().equals(where.main))) {
+                throw new IllegalArgumentException("incident: no main with id '" + where.main + "' in " + network);
+            }
+            return new Place(Zone.main(where.main), Double.NaN, Double.NaN, "main " + where.main);
+        }
+        if (where.usng != null) {
+            double[] p = grid.locate(where.usng);
+            return new Place(new Zone.AtPoint(p[0], p[1], system), p[0], p[1], "USNG " + where.usng.trim());
+        }
+        List<Integer> found = Addresses.find(net, where.address);
+        if (found.isEmpty()) throw new IllegalArgumentException("incident: no service with an address matching '" + where.address + "'");
+        if (found.size() > 1) {
+            err.println("incident: the address '" + where.address + "' matches " + found.size() + " services; give one of:");
+            for (int i = 0; i < Math.min(found.size(), 30); i++) {
+                Service s = net.services().get(found.get(i));
+                err.println("  " + s.id() + "  " + s.address());
+            }
+            if (found.size() > 30) err.println("  ... and " + (found.size() - 30) + " more");
+            err.flush();
+            return null;
+        }
+        int i = found.get(0);
+        Service s = net.services().get(i);
+        int seg = segs.serviceSegment(i);
+        if (seg < 0) throw new IllegalArgumentException("incident: service " + s.id() + " (" + s.address() + ") is not attached to active pipe");
+        double x = s.geometry() == null ? Double.NaN : s.geometry().getX();
+        double y = s.geometry() == null ? Double.NaN : s.geometry().getY();
+        return new Place(new Zone.OfSegments(new int[] {seg}), x, y, "address " + s.address() + " (service " + s.id() + ")");
+    }
+
+    private static int fail(PrintWriter err, String message) {
+        err.println(message);
+        err.flush();
+        return 2;
+    }
+}

@@ -1,0 +1,202 @@
+package org.shutline.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import javax.imageio.ImageIO;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.shutline.model.Caution;
+
+/**
+ * The emergency commands on the sample town (sample-gis/README.md): a leak on the
+ * intermediate-pressure main M-IP-007 between V-013 and V-004, which feeds ST-S1 and
+ * so the whole of LP-SOUTH (514 services, 653 meters, the care home); an over-pressure
+ * of LP-SOUTH; the tables; the phase cards of a small renewal plan.
+ */
+class EmergencyCommandsTest {
+    static final String NET = "sample-gis/tallowmere.gpkg";
+    static final String PLAN = "src/test/resources/emerg/tallowmere-cards-plan.yaml";
+    static final ObjectMapper JSON = new ObjectMapper();
+
+    @TempDir Path dir;
+
+    static CommandsTest.Run run(String... args) {
+        return CommandsTest.run(args);
+    }
+
+    @Test
+    void leakOnTheIntermediatePressureMainInText() {
+        CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("1. V-013").contains("2. V-004")
+                .contains("V-004 (operability unknown): then close V-005")
+                .contains("Services off 514, meters off 653")
+                .contains("SV-C-CARE")
+                .contains("District(s) left dead: LP-SOUTH")
+                .contains("100 m in all directions (ERG Guide 115)")
+                .contains("USNG 15T WJ 12547 90596")
+                .contains(Caution.TEXT);
+    }
+
+    @Test
+    void leakOnTheIntermediatePressureMainInJson() throws Exception {
+        CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01",
+                "--crews", "1", "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(j.get("kind").asText()).isEqualTo("leak");
+        assertThat(j.get("system").asText()).isEqualTo("IP-1");
+        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-013", "V-004");
+        assertThat(j.get("services_off").asInt()).isEqualTo(514);
+        assertThat(j.get("meters_off").asInt()).isEqualTo(653);
+        assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CARE");
+        JsonNode resp = j.get("response");
+        // 653 meters / 10 per technician-hour = 65.3; relight 653 x 1.1 / 1.25 = 574.64 (common-practice rates)
+        assertThat(resp.get("shutoff_tech_hours").asDouble()).isEqualTo(65.3);
+        assertThat(resp.get("relight_tech_hours").asDouble()).isEqualTo(574.64);
+        assertThat(resp.get("purge").asBoolean()).isTrue();
+        // one crew: V-013 then V-004, both on Gorse Avenue 45 m apart: 20 min operating + the drive
+        JsonNode vt = j.get("valve_time");
+        assertThat(vt.get("crews")).hasSize(1);
+        double drive = vt.get("drive_m").asDouble();
+        assertThat(drive).isBetween(40 * 1.3, 50 * 1.3);
+        assertThat(vt.get("elapsed_minutes").asDouble()).isBetween(20.0, 20.2);
+        assertThat(j.get("work_packages").get(0).get("sheet").asText()).isEqualTo("critical customers first");
+        assertThat(j.get("caution").asText()).isEqualTo(Caution.TEXT);
+    }
+
+    @Test
+    void leakInAStationFedDistrictNamesTheStationsToStop() throws Exception {
+        // next to Larch Road Clinic: LP-NORTH, one valve segment fed straight by ST-N1 and ST-N2
+        CommandsTest.Run r = run("incident", NET, "--at", "512613,4890915", "--as-of", "2026-12-01", "--format", "json");
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(j.get("isolable").asBoolean()).isFalse();
+        assertThat(texts(j.get("stations_to_stop"))).containsExactly("ST-N1", "ST-N2");
+        assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011", "V-012");
+        assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CLINIC", "SV-C-SCHOOL1");
+        assertThat(j.get("meters_off").asInt()).isEqualTo(915);
+    }
+
+    @Test
+    void addressesAreMatchedWithoutCaseAndAmbiguityListsTheCandidates() throws Exception {
+        CommandsTest.Run one = run("incident", NET, "--address", "elder street care home, 431 ELDER STREET", "--as-of", "2026-12-01",
+                "--format", "json");
+        assertThat(one.code()).as(one.err()).isZero();
+        JsonNode j = JSON.readTree(one.out());
+        assertThat(j.get("location").get("given").asText()).contains("SV-C-CARE");
+        assertThat(j.get("system").asText()).isEqualTo("LP-SOUTH");
+        CommandsTest.Run many = run("incident", NET, "--address", "Elder Street");
+        assertThat(many.code()).isEqualTo(2);
+        assertThat(many.err()).contains("matches").contains("SV-0874  101 Elder Street");
+        assertThat(many.out()).isEmpty();
+        assertThat(run("incident", NET, "--address", "no such road").code()).isEqualTo(2);
+    }
+
+    @Test
+    void gridReferenceIsTheCentreOfItsCell() throws Exception {
+        // 10 m reference: cell 12540..12550 E, 90590..90600 N: centre 12545, 90595 (FGDC-STD-011-2001 truncation)
+        CommandsTest.Run r = run("incident", NET, "--usng", "15T WJ 1254 9059", "--system", "IP-1", "--as-of", "2026-12-01",
+                "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode loc = JSON.readTree(r.out()).get("location");
+        assertThat(loc.get("usng").asText()).isEqualTo("15T WJ 12545 90595");
+        assertThat(texts(JSON.readTree(r.out()).get("valves_to_close"), "valve")).containsExactly("V-013", "V-004");
+        assertThat(run("incident", NET, "--usng", "not a grid ref").code()).isEqualTo(2);
+    }
+
+    @Test
+    void overPressureOfADistrict() throws Exception {
+        CommandsTest.Run r = run("incident", NET, "--kind", "overpressure", "--system", "LP-SOUTH", "--main", "M-CI-01",
+                "--as-of", "2026-12-01", "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(j.get("feeds")).singleElement().satisfies(f -> {
+            assertThat(f.get("id").asText()).isEqualTo("ST-S1");
+            assertThat(texts(f.get("inlet_valves"))).containsExactly("V-013");
+            assertThat(texts(f.get("upstream").get("valves_to_close"))).doesNotContain("V-013").isNotEmpty();
+        });
+        assertThat(j.get("services_at_risk").asInt()).isEqualTo(514);
+        assertThat(j.get("meters_at_risk").asInt()).isEqualTo(653);
+        assertThat(j.get("services_to_check").get(0).asText()).isEqualTo("SV-C-CARE");
+        assertThat(texts(j.get("response").get("dead_systems"))).containsExactly("LP-SOUTH");
+        // the system comes from the place when --system is not given
+        CommandsTest.Run byPlace = run("incident", NET, "--kind", "overpressure", "--main", "M-CI-01", "--format", "json");
+        assertThat(JSON.readTree(byPlace.out()).get("system").asText()).isEqualTo("LP-SOUTH");
+        assertThat(run("incident", NET, "--kind", "overpressure", "--system", "NOPE", "--main", "M-CI-01").code()).isEqualTo(2);
+    }
+
+    @Test
+    void riskWritesTheTablesTheLayerAndTheMap() throws Exception {
+        CommandsTest.Run r = run("risk", NET, "--out", dir.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("ST-S1").contains("Valves to fix first").contains(Caution.TEXT);
+        List<String> seg = Files.readAllLines(dir.resolve("segments.csv"));
+        assertThat(seg.get(0)).isEqualTo(String.join(",", RiskCommand.SEGMENT_HEADER));
+        assertThat(seg).hasSize(19); // 18 segments with pipe in the sample town
+        assertThat(seg.get(1)).startsWith("1,").contains("LP-NORTH").contains(",703,915,2,0,no");
+        List<String> st = Files.readAllLines(dir.resolve("stations.csv"));
+        assertThat(st.get(1)).startsWith("1,ST-S1,Weir Lane Station,IP-1,LP-SOUTH,yes,514,653,1,V-013");
+        List<String> valves = Files.readAllLines(dir.resolve("valves-to-fix.csv"));
+        assertThat(valves.get(0)).isEqualTo(String.join(",", RiskCommand.VALVE_HEADER));
+        assertThat(valves.size()).isGreaterThan(10);
+        BufferedImage img = ImageIO.read(dir.resolve("risk-map.png").toFile());
+        assertThat(img.getWidth()).isEqualTo(1600);
+        try (var files = Files.list(dir)) {
+            assertThat(files.map(p -> p.getFileName().toString())).noneMatch(n -> n.endsWith(".tmp"));
+        }
+        // the layer read back by GDAL (ogrinfo)
+        Assumptions.assumeTrue(Files.isExecutable(Path.of("/usr/bin/ogrinfo")), "ogrinfo not installed: skipped");
+        Process p = new ProcessBuilder("/usr/bin/ogrinfo", "-so", dir.resolve("risk-segments.gpkg").toString(), "segments")
+                .redirectErrorStream(true).start();
+        String info = new String(p.getInputStream().readAllBytes());
+        p.waitFor();
+        assertThat(info).contains("Feature Count: 18").contains("services_off: Integer").contains("Multi Line String");
+    }
+
+    @Test
+    void cardsPerPhaseAsTextJsonAndPdf() throws Exception {
+        CommandsTest.Run r = run("cards", NET, PLAN, "--out", dir.toString(), "--as-of", "2026-12-01", "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(j.get("cards")).hasSize(3);
+        JsonNode one = j.get("cards").get(0);
+        assertThat(one.get("work_site").asText()).contains("tie-in on M-S-0210");
+        assertThat(texts(one.get("excavation").get("stations_to_stop"))).containsExactly("ST-S1");
+        assertThat(one.get("overpressure").get(0).get("system").asText()).isEqualTo("LP-SOUTH");
+        // phase 3 cuts the cast-iron main and abandons it: no live pipe left in the pits
+        JsonNode three = j.get("cards").get(2);
+        assertThat(three.has("excavation")).isFalse();
+        assertThat(three.get("work_site").asText()).contains("nothing to isolate");
+        try (PDDocument pdf = Loader.loadPDF(dir.resolve("emergency-cards.pdf").toFile())) {
+            assertThat(pdf.getNumberOfPages()).isEqualTo(3);
+            String text = new PDFTextStripper().getText(pdf).replaceAll("\\s+", " ");
+            assertThat(text).contains("Emergency card: phase 1").contains("OVER-PRESSURE OF LP-SOUTH").contains("CAUTION");
+        }
+        CommandsTest.Run txt = run("cards", NET, PLAN, "--no-pdf", "--as-of", "2026-12-01");
+        assertThat(txt.out()).contains("=== Phase 2").contains("close inlet valve V-013").contains(Caution.TEXT);
+        assertThat(run("cards", NET, dir.resolve("missing.yaml").toString(), "--no-pdf").code()).isEqualTo(2);
+    }
+
+    private static List<String> texts(JsonNode array, String field) {
+        List<String> out = new ArrayList<>();
+        for (JsonNode n : array) out.add(n.get(field).asText());
+        return out;
+    }
+
+    private static List<String> texts(JsonNode array) {
+        List<String> out = new ArrayList<>();
+        for (JsonNode n : array) out.add(n.asText());
+        return out;
+    }
+}
