@@ -579,9 +579,22 @@ public final class MainWindow extends JFrame {
 
     // ---- identify, select, search ----
 
+    /** Searches in a worker (a large network has hundreds of thousands of addresses), then selects and zooms. */
     void find(String text) {
         if (ws == null) return;
-        List<Pick> found = Identify.search(ws, text);
+        Workspace w0 = ws;
+        run(new Task<>("find " + text, p -> Identify.search(w0, text), found -> {
+            if (ws != w0) return;
+            showFound(text, found);
+        }, t -> failed("Find", t)));
+    }
+
+    /** Searches on the calling thread (tests, small networks) and shows the result. */
+    void findNow(String text) {
+        if (ws != null) showFound(text, Identify.search(ws, text));
+    }
+
+    private void showFound(String text, List<Pick> found) {
         if (found.isEmpty()) {
             status("Nothing found for '" + text + "'");
             return;
@@ -636,9 +649,12 @@ public final class MainWindow extends JFrame {
 
         @Override public void rectangle(Envelope env) {
             if (ws == null) return;
-            List<Pick> in = Identify.in(ws, env);
-            select(in.isEmpty() ? null : in.get(0), in);
-            status(in.size() + " features selected");
+            Workspace w0 = ws;
+            run(new Task<>("select", p -> Identify.in(w0, env), in -> {
+                if (ws != w0) return;
+                select(in.isEmpty() ? null : in.get(0), in);
+                status(in.size() + " features selected");
+            }, t -> failed("Select", t)));
         }
 
         @Override public void cursor(double x, double y) {

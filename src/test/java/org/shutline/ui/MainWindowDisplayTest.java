@@ -128,7 +128,7 @@ class MainWindowDisplayTest {
     void editingThePlanReEvaluatesShowsErrorsAndSavesARoundTrippingFile() throws Exception {
         // abandon M-CI-01 a second time, after step 3: the applier refuses, the error line says so
         onEdt(() -> {
-            win.find("M-CI-01");
+            win.findNow("M-CI-01");
             win.planPanel().selectStep(2);
             win.planPanel().addForSelection("abandon");
             return null;
@@ -138,7 +138,7 @@ class MainWindowDisplayTest {
         // remove it again; add a close step for an open valve instead: pick valve V-001 and add a close step
         onEdt(() -> {
             win.planPanel().removeStep();
-            win.find("V-001");
+            win.findNow("V-001");
             win.planPanel().selectStep(0);
             win.planPanel().addForSelection("close");
             return null;
@@ -210,7 +210,7 @@ class MainWindowDisplayTest {
         assertThat(hazardStep).as("the sample plan has a step with a critical hazard").isNotNegative();
         onEdt(() -> {
             win.planPanel().selectStep(hazardStep);
-            win.find(win.planPanel().result().steps().get(hazardStep).hazards().stream()
+            win.findNow(win.planPanel().result().steps().get(hazardStep).hazards().stream()
                     .filter(h -> h.severity() == org.shutline.model.Severity.CRITICAL).findFirst().orElseThrow().features().get(0));
             return null;
         });
