@@ -469,8 +469,9 @@ public final class MainWindow extends JFrame {
         }));
         tools.add(item("Find...", KeyEvent.VK_F, e -> search.requestFocusInWindow()));
         JMenu planMenu = new JMenu("Plan");
-        planMenu.add(keyItem("Next step", KeyStroke.getKeyStroke(KeyEvent.VK_F8, 0), e -> stepBy(1)));
-        planMenu.add(keyItem("Previous step", KeyStroke.getKeyStroke(KeyEvent.VK_F7, 0), e -> stepBy(-1)));
+        // Alt+Down / Alt+Up: F6/F8 belong to the split panes and Ctrl+Page Up/Down to the tabs
+        planMenu.add(keyItem("Next step", KeyStroke.getKeyStroke(KeyEvent.VK_DOWN, java.awt.event.InputEvent.ALT_DOWN_MASK), e -> stepBy(1)));
+        planMenu.add(keyItem("Previous step", KeyStroke.getKeyStroke(KeyEvent.VK_UP, java.awt.event.InputEvent.ALT_DOWN_MASK), e -> stepBy(-1)));
         JMenu help = new JMenu("Help");
         help.add(item("About Shutline", 0, e -> about()));
         mb.add(file);
@@ -507,7 +508,7 @@ public final class MainWindow extends JFrame {
         plan.selectStep(Math.max(0, Math.min(plan.stepCount() - 1, i)));
     }
 
-    private void setDark(boolean on) {
+    void setDark(boolean on) {
         if (on) FlatDarkLaf.setup();
         else FlatLightLaf.setup();
         FlatLaf.updateUI();

@@ -190,6 +190,89 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(5)
+    void mouseDragPansWheelZoomsKeysStepAndTheThemeAndRecentFilesAreKept() throws Exception {
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        onEdt(() -> {
+            win.map().zoomToExtent();
+            win.planPanel().selectStep(0);
+            return null;
+        });
+        waitFor("map drawn", () -> win.map().isSettled());
+        var before = onEdt(() -> win.map().viewport());
+        Point c = onEdt(() -> {
+            Point base = win.map().getLocationOnScreen();
+            return new Point(base.x + win.map().getWidth() / 2, base.y + win.map().getHeight() / 2);
+        });
+        robot.mouseMove(c.x, c.y);
+        robot.mousePress(InputEvent.BUTTON1_DOWN_MASK);
+        for (int i = 1; i <= 10; i++) robot.mouseMove(c.x + 10 * i, c.y);
+        robot.mouseRelease(InputEvent.BUTTON1_DOWN_MASK);
+        robot.waitForIdle();
+        var panned = onEdt(() -> win.map().viewport());
+        // dragging 100 px to the right moves the content right: the centre goes 100 px west
+        assertThat(panned.centerX()).isCloseTo(before.centerX() - 100 * before.scale(), org.assertj.core.data.Offset.offset(2 * before.scale()));
+        assertThat(panned.scale()).isEqualTo(before.scale());
+        robot.mouseWheel(-2);
+        robot.waitForIdle();
+        waitFor("zoomed", () -> win.map().viewport().scale() < panned.scale());
+        assertThat(onEdt(() -> win.map().viewport().scale())).isCloseTo(panned.scale() / 1.5625, org.assertj.core.data.Offset.offset(panned.scale() * 0.01));
+        onEdt(() -> {
+            win.setDark(true);
+            return null;
+        });
+        assertThat(onEdt(() -> win.map().style())).isEqualTo(org.shutline.render.MapStyle.DARK);
+        assertThat(onEdt(() -> javax.swing.UIManager.getLookAndFeel().getName())).containsIgnoringCase("dark");
+        onEdt(() -> {
+            win.setDark(false);
+            return null;
+        });
+        assertThat(onEdt(() -> win.recentList())).anyMatch(r -> r.startsWith(SampleWorkspace.NETWORK.toAbsolutePath().toString()));
+    }
+
+    @Test
+    @Order(6)
+    void functionKeysStepThroughThePlan() throws Exception {
+        onEdt(() -> {
+            win.toFront();
+            win.map().requestFocusInWindow();
+            win.planPanel().selectStep(0);
+            return null;
+        });
+        long end = System.nanoTime() + 3_000_000_000L;
+        while (!onEdt(() -> win.isFocused()) && System.nanoTime() < end) Thread.sleep(50);
+        org.junit.jupiter.api.Assumptions.assumeTrue(onEdt(() -> win.isFocused()),
+                "the window did not get the keyboard focus (no window manager on this display): key test skipped");
+        Robot robot = new Robot();
+        robot.setAutoDelay(20);
+        key(robot, java.awt.event.KeyEvent.VK_DOWN);
+        waitFor("next step (Alt+Down)", () -> win.planPanel().selectedStep() == 1);
+        key(robot, java.awt.event.KeyEvent.VK_UP);
+        waitFor("previous step (Alt+Up)", () -> win.planPanel().selectedStep() == 0);
+        // Ctrl+0: zoom to the extent
+        onEdt(() -> {
+            win.map().zoomIn();
+            return null;
+        });
+        var zoomedIn = onEdt(() -> win.map().viewport().scale());
+        robot.keyPress(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.keyPress(java.awt.event.KeyEvent.VK_0);
+        robot.keyRelease(java.awt.event.KeyEvent.VK_0);
+        robot.keyRelease(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.waitForIdle();
+        waitFor("zoom to extent (Ctrl+0)", () -> win.map().viewport().scale() > zoomedIn);
+    }
+
+    private static void key(Robot robot, int code) {
+        robot.keyPress(java.awt.event.KeyEvent.VK_ALT);
+        robot.keyPress(code);
+        robot.keyRelease(code);
+        robot.keyRelease(java.awt.event.KeyEvent.VK_ALT);
+        robot.waitForIdle();
+    }
+
+    @Test
     @Order(4)
     void theBundledSamplePlanShowsItsCriticalHazardStep() throws Exception {
         Path samplePlan = Path.of("sample-gis/tallowmere-plan.yaml");
