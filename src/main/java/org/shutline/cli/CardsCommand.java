@@ -98,7 +98,7 @@ public final class CardsCommand implements Callable<Integer> {
             err.flush();
             return 2;
         }
-        Isolation.Options options = Isolation.Options.asOf(asOf == null ? LocalDate.now() : asOf);
+        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
         GridSheets grid = GridSheets.of(t.network().crs());
         if (!noPdf) {

@@ -133,7 +133,7 @@ public final class IncidentCommand implements Callable<Integer> {
             return fail(err, e.getMessage());
         }
         if (place == null) return 2;
-        Isolation.Options options = Isolation.Options.asOf(asOf == null ? LocalDate.now() : asOf);
+        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
         ObjectNode root = Json.object();
         StringBuilder sb = new StringBuilder();
         root.put("kind", kind.name());
