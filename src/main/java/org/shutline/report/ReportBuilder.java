@@ -1,0 +1,412 @@
+package org.shutline.report;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDateTime;
+import java.time.ZoneId;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import org.jfree.chart.JFreeChart;
+import org.locationtech.jts.geom.Envelope;
+import org.shutline.analysis.PlanEvaluation;
+import org.shutline.analysis.hazard.Hazard;
+import org.shutline.io.GeoPackageWriter;
+import org.shutline.io.WriteLayer;
+import org.shutline.model.Network;
+import org.shutline.model.Progress;
+import org.shutline.model.Service;
+import org.shutline.render.GasOffArea;
+import org.shutline.render.GeoTransform;
+import org.shutline.render.GridReference;
+import org.shutline.render.HazardMark;
+import org.shutline.render.MapOverlays;
+import org.shutline.render.MapPainter;
+import org.shutline.render.MapScene;
+import org.shutline.render.UsngGrid;
+
+/**
+ * Builds and writes the field package of one view (a plan step or an incident): the
+ * PDF report, the map as PNG and SVG, the result layers as GeoPackage and GeoJSON, and
+ * the valve and customer lists as CSV. The public entry point for the command line
+ * ({@code shutline export}) and the desktop window's export menu.
+ *
+ * <p>The PDF holds, in this order: the overview map (the view fitted to its area of
+ * interest, with the map-book sheet index drawn on it when the book has more than one
+ * sheet), one map-book sheet per cell of the {@link MapBook} (each with "continued on
+ * sheet N" at edges shared with another sheet and the valves and critical customers on
+ * it), the valve operation list, the affected-customer list, the hazards with their
+ * actions, and, for a plan, the charts of services and meters off per step and
+ * customer-hours per phase. Every page carries the safety caution.
+ *
+ * <p>Files written in the output folder: {@code report.pdf}, {@code map.png},
+ * {@code map.svg}, {@code results.gpkg}, one {@code <layer>.geojson} per result layer
+ * ({@link ResultLayers}), {@code valves.csv}, {@code customers.csv}, and for a plan
+ * {@code chart-steps.png/.svg} and {@code chart-phases.png/.svg}: only those of the
+ * chosen formats. A target path that is the input network or plan file is refused
+ * ({@link IOException}) before anything is written.
+ */
+public final class ReportBuilder {
+    /** Output formats. */
+    public enum Format {
+        PDF, PNG, SVG, GPKG, GEOJSON, CSV;
+
+        /** Parses "pdf", "geojson", ... (any case). */
+        public static Optional<Format> parse(String s) {
+            for (Format f : values()) if (f.name().equalsIgnoreCase(s.trim())) return Optional.of(f);
+            return Optional.empty();
+        }
+    }
+
+    /**
+     * Settings: page format, PNG resolution, formats, who prepared the maps, when (the
+     * title block's date), the most map-book sheets, and the grid-reference precision of
+     * the valve list.
+     */
+    public record Options(PageFormat page, int dpi, Set<Format> formats, String preparedBy, LocalDateTime made,
+                          int maxBookSheets, GridReference.Precision listPrecision) {
+        public Options {
+            Objects.requireNonNull(page, "page");
+            formats = formats.isEmpty() ? Set.of() : Set.copyOf(EnumSet.copyOf(formats));
+            preparedBy = preparedBy == null ? "" : preparedBy;
+            Objects.requireNonNull(made, "made");
+            if (dpi < 10 || dpi > 1200) throw new IllegalArgumentException("dpi must be 10..1200, was " + dpi);
+            if (maxBookSheets < 1) throw new IllegalArgumentException("maxBookSheets must be at least 1");
+        }
+
+        /** Letter landscape, 150 dpi, every format, made now, at most 9 book sheets, references to 10 m. */
+        public static Options defaults() {
+            return new Options(PageFormat.LETTER_LANDSCAPE, 150, EnumSet.allOf(Format.class), "", LocalDateTime.now(), 9,
+                    GridReference.Precision.M10);
+        }
+
+        public Options withPage(PageFormat p) {
+            return new Options(p, dpi, formats, preparedBy, made, maxBookSheets, listPrecision);
+        }
+
+        public Options withDpi(int d) {
+            return new Options(page, d, formats, preparedBy, made, maxBookSheets, listPrecision);
+        }
+
+        public Options withFormats(Set<Format> f) {
+            return new Options(page, dpi, f, preparedBy, made, maxBookSheets, listPrecision);
+        }
+
+        public Options withPreparedBy(String who) {
+            return new Options(page, dpi, formats, who, made, maxBookSheets, listPrecision);
+        }
+
+        public Options withMade(LocalDateTime when) {
+            return new Options(page, dpi, formats, preparedBy, when, maxBookSheets, listPrecision);
+        }
+    }
+
+    private final ReportView view;
+    private final Path networkFile;
+    private final PlanEvaluation.Result plan;
+    private final Path planFile;
+    private final Options options;
+    private final Network network;
+    private final GeoTransform geo;
+    private final MapPainter painter;
+    private final StreetLocator streets;
+    private final TitleInfo title;
+    private final MapBook book;
+
+    private ReportBuilder(ReportView view, Path networkFile, PlanEvaluation.Result plan, Path planFile, Options options) {
+        this.view = Objects.requireNonNull(view, "view");
+        this.networkFile = networkFile;
+        this.plan = plan;
+        this.planFile = planFile;
+        this.options = Objects.requireNonNull(options, "options");
+        this.network = view.state().network();
+        this.geo = GeoTransform.forCrs(network.crs()).orElse(null);
+        MapPainter p = new MapPainter(new MapScene(network), MapSheet.printStyle());
+        this.painter = geo == null ? p : p.withGrid(new UsngGrid(geo));
+        this.streets = new StreetLocator(network.context(), network.crs().unit());
+        this.title = new TitleInfo(plan == null ? "Incident response: " + network.sourceName() : plan.states().plan().project(),
+                view.phase(), view.subject(), options.made(), options.preparedBy(),
+                networkFile == null ? network.sourceName() : String.valueOf(networkFile.getFileName()), modified(networkFile));
+        MapSheet.Layout lay = MapSheet.layout(options.page().widthPt(), options.page().heightPt());
+        this.book = MapBook.plan(view.gasOff(), area(), lay.frame().getWidth(), lay.frame().getHeight(),
+                network.crs().unit(), options.maxBookSheets());
+    }
+
+    /** A builder for a view of an incident or a step; {@code networkFile} (may be null) names the input in the title block. */
+    public static ReportBuilder of(ReportView view, Path networkFile, Options options) {
+        return new ReportBuilder(view, networkFile, null, null, options);
+    }
+
+    /** The same with the evaluated plan the step belongs to (for the title, the charts and the input check). */
+    public ReportBuilder withPlan(PlanEvaluation.Result r, Path file) {
+        return new ReportBuilder(view, networkFile, r, file, options);
+    }
+
+    private static LocalDateTime modified(Path p) {
+        if (p == null || !Files.exists(p)) return null;
+        try {
+            return LocalDateTime.ofInstant(Files.getLastModifiedTime(p).toInstant(), ZoneId.systemDefault());
+        } catch (IOException e) {
+            return null;
+        }
+    }
+
+    public ReportView view() {
+        return view;
+    }
+
+    public MapBook book() {
+        return book;
+    }
+
+    public TitleInfo title() {
+        return title;
+    }
+
+    public StreetLocator streets() {
+        return streets;
+    }
+
+    /** The area of interest: gas-off extent, valves to operate, hazards and the isolation circle; else the whole network. */
+    public Envelope area() {
+        Envelope e = new Envelope(view.gasOff().getEnvelopeInternal());
+        for (ReportView.OperatedValve v : view.valves()) e.expandToInclude(v.x(), v.y());
+        for (Hazard h : view.hazards()) if (Double.isFinite(h.x()) && Double.isFinite(h.y())) e.expandToInclude(h.x(), h.y());
+        if (view.ring() != null) {
+            double r = network.crs().unit().fromMetres(view.ring().radiusMetres());
+            e.expandToInclude(new Envelope(view.ring().centerX() - r, view.ring().centerX() + r,
+                    view.ring().centerY() - r, view.ring().centerY() + r));
+        }
+        if (e.isNull()) return new MapScene(network).extent();
+        if (e.getWidth() == 0 && e.getHeight() == 0) e.expandBy(network.crs().unit().fromMetres(100));
+        return e;
+    }
+
+    /** What is drawn over the network: gas-off extent, valves to operate, hazards at a position, isolation circle. */
+    public MapOverlays overlays() {
+        MapOverlays o = MapOverlays.NONE;
+        if (!view.gasOff().isEmpty()) o = o.withGasOff(List.of(GasOffArea.of(view.gasOff())));
+        o = o.withValvesToOperate(view.valves());
+        List<HazardMark> marks = new ArrayList<>();
+        for (Hazard h : view.hazards()) {
+            if (Double.isFinite(h.x()) && Double.isFinite(h.y())) marks.add(HazardMark.of(h.x(), h.y(), h.severity(), h.code()));
+        }
+        o = o.withHazards(marks);
+        if (view.ring() != null) o = o.withRings(List.of(view.ring()));
+        return o;
+    }
+
+    /** The map of the view fitted to its area of interest, with all valves and critical customers listed beside it. */
+    public MapSheet mapSheet() {
+        return MapSheet.of(painter, overlays(), area(), title, geo).withPaperName(paperName())
+                .withNotes(notesHeading(), notes(null));
+    }
+
+    private String paperName() {
+        String n = options.page().paper().name();
+        return n.charAt(0) + n.substring(1).toLowerCase(Locale.ROOT);
+    }
+
+    private String notesHeading() {
+        return view.valves().isEmpty() ? "Critical customers off gas" : "Valves to operate, critical customers off gas";
+    }
+
+    /** Lines for the side panel: valves and critical customers off gas inside {@code within} (everywhere when null). */
+    private List<String> notes(Envelope within) {
+        List<String> out = new ArrayList<>();
+        for (ReportView.OperatedValve v : view.valves()) {
+            if (within != null && !within.contains(v.x(), v.y())) continue;
+            String where = streets.describe(v.x(), v.y());
+            out.add(v.order() + ". " + (v.close() ? "close " : "open ") + v.valveId() + (where.isEmpty() ? "" : ", " + where));
+        }
+        List<Service> svc = network.services();
+        var off = view.servicesOff();
+        for (int i = off.nextSetBit(0); i >= 0; i = off.nextSetBit(i + 1)) {
+            Service s = svc.get(i);
+            if (!s.isCritical() || s.geometry() == null) continue;
+            if (within != null && !within.contains(s.geometry().getX(), s.geometry().getY())) continue;
+            String kind = s.critical() == null || s.critical().isBlank() ? "critical" : s.critical();
+            out.add("! " + kind + " " + s.id() + (s.address() == null ? "" : ", " + s.address()));
+        }
+        return out;
+    }
+
+    /** The overview (with the sheet index when the book has several sheets) and one sheet per book cell. */
+    public List<Sheet> mapSheets() {
+        List<Sheet> out = new ArrayList<>();
+        Envelope all = area();
+        all.expandToInclude(book.extent());
+        MapSheet overview = MapSheet.of(painter, overlays(), all, title, geo).withPaperName(paperName())
+                .withNotes(notesHeading(), notes(null));
+        if (book.size() > 1) {
+            List<MapSheet.IndexCell> idx = new ArrayList<>();
+            for (MapBook.Cell c : book.cells()) idx.add(new MapSheet.IndexCell(c.number(), c.ground()));
+            overview = overview.withIndex(idx).withSheetLabel("Overview and sheet index (" + book.size() + " sheets)");
+        } else {
+            overview = overview.withSheetLabel("Overview");
+        }
+        out.add(overview);
+        if (book.size() <= 1) return out;
+        for (MapBook.Cell c : book.cells()) {
+            Envelope g = c.ground();
+            Map<MapSheet.Side, Integer> nb = book.neighbours(c);
+            Map<MapSheet.Side, String> edges = new java.util.EnumMap<>(MapSheet.Side.class);
+            nb.forEach((side, n) -> edges.put(side, "continued on sheet " + n));
+            out.add(MapSheet.of(painter, overlays(), g, title, geo).withPaperName(paperName())
+                    .withScale(book.scale(), g.centre().x, g.centre().y)
+                    .withSheetLabel("Sheet " + c.number() + " of " + book.size())
+                    .withEdges(edges)
+                    .withNotes("On sheet " + c.number() + ": valves, critical customers", notes(g)));
+        }
+        return out;
+    }
+
+    public List<List<String>> valveRows() {
+        return FieldLists.valveRows(view, geo, options.listPrecision(), streets);
+    }
+
+    public List<List<String>> customerRows() {
+        return FieldLists.customerRows(view, book.size() > 1 ? book : null);
+    }
+
+    /** Every page of report.pdf in order. */
+    public List<Sheet> reportSheets() {
+        PageFormat f = options.page();
+        List<Sheet> out = new ArrayList<>(mapSheets());
+        String sub = title.project() + " - " + view.subject();
+        out.addAll(TableSheets.layout("Valve operation list", sub, FieldLists.VALVE_HEADER, valveRows(), f));
+        out.addAll(TableSheets.layout("Customers off gas (" + view.servicesOff().cardinality() + " services, "
+                + view.metersOff() + " meters)", sub, FieldLists.CUSTOMER_HEADER, customerRows(), f));
+        if (!view.hazards().isEmpty()) out.addAll(TableSheets.layout("Hazards and actions", sub,
+                List.of("code", "severity", "features", "what is wrong", "action"), hazardRows(), f));
+        if (plan != null) {
+            out.add(Charts.sheet(stepsChart(), "Services and meters off gas per step"));
+            out.add(Charts.sheet(phasesChart(), "Customer-hours off gas per phase"));
+        }
+        return out;
+    }
+
+    private List<List<String>> hazardRows() {
+        List<List<String>> rows = new ArrayList<>();
+        for (Hazard h : view.hazards()) {
+            rows.add(List.of(h.code(), h.severity().name().toLowerCase(Locale.ROOT), String.join(" ", h.features()),
+                    h.message(), h.action()));
+        }
+        return rows;
+    }
+
+    private JFreeChart stepsChart() {
+        List<Charts.StepFigure> fs = new ArrayList<>();
+        for (PlanEvaluation.StepResult s : plan.steps()) {
+            fs.add(new Charts.StepFigure(s.step().number(), s.servicesOff(), (int) s.metersOff()));
+        }
+        return Charts.offPerStep(plan.states().plan().project(), fs);
+    }
+
+    private JFreeChart phasesChart() {
+        List<Charts.PhaseFigure> fs = new ArrayList<>();
+        for (PlanEvaluation.PhaseResult p : plan.phases()) fs.add(new Charts.PhaseFigure(p.phase().name(), p.customerHours()));
+        return Charts.customerHoursPerPhase(plan.states().plan().project(), fs);
+    }
+
+    public List<WriteLayer> resultLayers() {
+        return ResultLayers.build(view, geo, streets, book.size() > 1 ? book : null);
+    }
+
+    /**
+     * Writes the chosen formats into {@code dir} (created when missing); returns the files written.
+     *
+     * @throws IOException when a file cannot be written or a target is an input file
+     */
+    public List<Path> write(Path dir, Progress progress) throws IOException {
+        Set<Format> fm = options.formats();
+        List<Path> targets = targets(dir);
+        for (Path t : targets) refuseInput(t);
+        List<Path> out = new ArrayList<>();
+        PageFormat page = options.page();
+        if (fm.contains(Format.PDF)) {
+            progress.checkCancelled();
+            Path p = dir.resolve("report.pdf");
+            DocumentExport.pdf(reportSheets(), page, new DocumentExport.Info(title.project(), view.subject(),
+                    options.preparedBy()), p);
+            out.add(p);
+        }
+        if (fm.contains(Format.PNG)) {
+            progress.checkCancelled();
+            DocumentExport.png(mapSheet(), page, options.dpi(), add(out, dir.resolve("map.png")));
+            if (plan != null) {
+                DocumentExport.png(Charts.sheet(stepsChart(), "Services and meters off gas per step"), page, options.dpi(),
+                        add(out, dir.resolve("chart-steps.png")));
+                DocumentExport.png(Charts.sheet(phasesChart(), "Customer-hours off gas per phase"), page, options.dpi(),
+                        add(out, dir.resolve("chart-phases.png")));
+            }
+        }
+        if (fm.contains(Format.SVG)) {
+            progress.checkCancelled();
+            DocumentExport.svg(mapSheet(), page, add(out, dir.resolve("map.svg")));
+            if (plan != null) {
+                DocumentExport.svg(Charts.sheet(stepsChart(), "Services and meters off gas per step"), page,
+                        add(out, dir.resolve("chart-steps.svg")));
+                DocumentExport.svg(Charts.sheet(phasesChart(), "Customer-hours off gas per phase"), page,
+                        add(out, dir.resolve("chart-phases.svg")));
+            }
+        }
+        List<WriteLayer> layers = fm.contains(Format.GPKG) || fm.contains(Format.GEOJSON) ? resultLayers() : List.of();
+        if (fm.contains(Format.GPKG)) {
+            progress.checkCancelled();
+            GeoPackageWriter.write(add(out, dir.resolve("results.gpkg")), network.crs(), layers, progress);
+        }
+        if (fm.contains(Format.GEOJSON)) {
+            for (WriteLayer l : layers) {
+                progress.checkCancelled();
+                GeoJsonExport.write(add(out, dir.resolve(l.name() + ".geojson")), l, network.crs());
+            }
+        }
+        if (fm.contains(Format.CSV)) {
+            Csv.write(add(out, dir.resolve("valves.csv")), FieldLists.VALVE_HEADER, valveRows());
+            Csv.write(add(out, dir.resolve("customers.csv")), FieldLists.CUSTOMER_HEADER, customerRows());
+        }
+        return List.copyOf(out);
+    }
+
+    private static Path add(List<Path> out, Path p) {
+        out.add(p);
+        return p;
+    }
+
+    /** Every path {@link #write} may write into {@code dir}. */
+    List<Path> targets(Path dir) {
+        List<Path> t = new ArrayList<>();
+        for (String n : List.of("report.pdf", "map.png", "map.svg", "results.gpkg", "valves.csv", "customers.csv",
+                "chart-steps.png", "chart-phases.png", "chart-steps.svg", "chart-phases.svg")) {
+            t.add(dir.resolve(n));
+        }
+        for (String n : List.of("gas_off", "valves_to_operate", "affected_services", "hazards", "station_sheds",
+                "isolation_circle")) {
+            t.add(dir.resolve(n + ".geojson"));
+        }
+        t.add(dir);
+        return t;
+    }
+
+    private void refuseInput(Path target) throws IOException {
+        for (Path in : new Path[] {networkFile, planFile}) {
+            if (in == null) continue;
+            if (same(in, target)) {
+                throw new IOException("refusing to write " + target + ": it is an input file (" + in
+                        + "); choose another output folder");
+            }
+        }
+    }
+
+    private static boolean same(Path a, Path b) throws IOException {
+        if (Files.exists(a) && Files.exists(b)) return Files.isSameFile(a, b);
+        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
+    }
+}
