@@ -19,14 +19,17 @@ import org.shutline.model.LinearUnit;
  * the area's envelope when there is no extent) are kept. Sheets are numbered 1.. row
  * by row from the north-west corner.
  *
- * <p>Scale: the most detailed round scale ({@link MapScales#ROUND}, from
- * {@link #MIN_SCALE}) at which at most {@code maxSheets} cells are needed; the
- * coarsest scale of the list when none is enough. Cost: O(scales x cells) prepared
+ * <p>Scale: among the round scales ({@link MapScales#ROUND}) from {@link #MIN_SCALE} to
+ * {@link #FIELD_SCALE}, the one needing the fewest sheets (ties: the most detailed);
+ * when that is still more than {@code maxSheets}, the most detailed coarser scale that
+ * needs at most {@code maxSheets}; the coarsest of the list when none is enough. Cost: O(scales x cells) prepared
  * intersection tests.
  */
 public final class MapBook {
     /** The most detailed scale a book sheet is drawn at. */
     public static final int MIN_SCALE = 1000;
+    /** Up to this scale the one with the fewest sheets is taken (a field map shows single services at 1:2,500). */
+    public static final int FIELD_SCALE = 2500;
 
     /** One sheet of the book: its number, grid column and row (0 = west, north), and the ground it shows. */
     public record Cell(int number, int column, int row, Envelope ground) {
@@ -69,9 +72,12 @@ public final class MapBook {
             if (d < MIN_SCALE) continue;
             double s = MapScales.crsUnitsPerPoint(d, unit);
             List<Cell> cs = cells(prep, e, frameWpt * s, frameHpt * s, gf);
-            best = cs;
-            bestScale = d;
-            if (cs.size() <= maxSheets) break;
+            boolean better = best == null || (d <= FIELD_SCALE ? cs.size() < best.size() : best.size() > maxSheets);
+            if (better) {
+                best = cs;
+                bestScale = d;
+            }
+            if (d >= FIELD_SCALE && best.size() <= maxSheets) break;
         }
         return new MapBook(bestScale, best);
     }

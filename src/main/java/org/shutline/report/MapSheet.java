@@ -147,19 +147,19 @@ public final class MapSheet implements Sheet {
             Rectangle2D frame = new Rectangle2D.Double(MARGIN + GAP, MARGIN + GAP, px - GAP - (MARGIN + GAP) - 6,
                     bottom - GAP - (MARGIN + GAP));
             double y = MARGIN;
-            Rectangle2D t = new Rectangle2D.Double(px, y, pw, 150);
-            Rectangle2D f = new Rectangle2D.Double(px, y + 156, pw, 44);
-            double rest = bottom - (y + 206);
-            Rectangle2D l = new Rectangle2D.Double(px, y + 206, pw, rest * 0.6);
-            Rectangle2D n = new Rectangle2D.Double(px, y + 206 + rest * 0.6 + 4, pw, rest * 0.4 - 4);
+            Rectangle2D t = new Rectangle2D.Double(px, y, pw, 140);
+            Rectangle2D f = new Rectangle2D.Double(px, y + 144, pw, 42);
+            double rest = bottom - (y + 190);
+            Rectangle2D l = new Rectangle2D.Double(px, y + 190, pw, rest * 0.6);
+            Rectangle2D n = new Rectangle2D.Double(px, y + 190 + rest * 0.6 + 4, pw, rest * 0.4 - 4);
             return new Layout(frame, t, f, l, n);
         }
         double ph = Math.min(230, h * 0.3);
         double py = bottom - ph;
         Rectangle2D frame = new Rectangle2D.Double(MARGIN + GAP, MARGIN + GAP, w - 2 * (MARGIN + GAP), py - GAP - 6 - (MARGIN + GAP));
         double cw = (w - 2 * MARGIN - 8) / 2;
-        Rectangle2D t = new Rectangle2D.Double(MARGIN, py, cw, 150);
-        Rectangle2D f = new Rectangle2D.Double(MARGIN, py + 156, cw, 44);
+        Rectangle2D t = new Rectangle2D.Double(MARGIN, py, cw, 140);
+        Rectangle2D f = new Rectangle2D.Double(MARGIN, py + 144, cw, 42);
         Rectangle2D n = new Rectangle2D.Double(MARGIN + cw + 8, py + ph * 0.55, cw, ph * 0.45);
         Rectangle2D l = new Rectangle2D.Double(MARGIN + cw + 8, py, cw, ph * 0.55 - 4);
         return new Layout(frame, t, f, l, n);
@@ -220,11 +220,29 @@ public final class MapSheet implements Sheet {
         paintEdges(g, lay.frame(), v);
         paintTitle(g, lay.title(), v, w, h);
         paintFurniture(g, lay.furniture(), v, s);
-        Legend.paint(g, lay.legend(), legend, s);
-        paintNotes(g, lay.notes());
+        Rectangle2D[] ln = split(lay.legend(), lay.notes(), legend.size(), s);
+        Legend.paint(g, ln[0], legend, s);
+        paintNotes(g, ln[1]);
         g.setColor(Color.BLACK);
         g.setFont(font(Font.PLAIN, 7));
         TableSheets.Footer.paint(g, w, h, MARGIN, sheetLabel.isEmpty() ? null : sheetLabel);
+    }
+
+    /**
+     * Shares the legend and notes boxes (the notes box below the legend, or beside it)
+     * between the two: the legend gets the height its entries need, the notes at least
+     * three lines when there are notes.
+     */
+    private Rectangle2D[] split(Rectangle2D legendBox, Rectangle2D notesBox, int entries, MapStyle s) {
+        if (notesBox.getX() != legendBox.getX()) return new Rectangle2D[] {legendBox, notesBox};
+        double top = legendBox.getY();
+        double bottom = notesBox.getMaxY();
+        double rowH = Math.max(s.symbolPx() * 1.7, 12);
+        double need = 20 + entries * rowH;
+        double minNotes = notes.isEmpty() && notesHeading.isEmpty() ? 0 : 14 + 3 * 9;
+        double lh = Math.min(need, bottom - top - minNotes);
+        return new Rectangle2D[] {new Rectangle2D.Double(legendBox.getX(), top, legendBox.getWidth(), lh),
+            new Rectangle2D.Double(notesBox.getX(), top + lh + 6, notesBox.getWidth(), bottom - top - lh - 6)};
     }
 
     private void paintIndex(Graphics2D g, Viewport v, MapStyle s) {
@@ -365,6 +383,6 @@ public final class MapSheet implements Sheet {
         MapStyle l = MapStyle.LIGHT;
         return new MapStyle("print", l.background(), l.foreground(), l.halo(), l.street(), l.streetLabel(),
                 l.systemColours(), l.service(), l.critical(), l.station(), l.tap(), l.source(), l.gasOff(), l.hazard(),
-                l.isolation(), l.grid(), font(Font.PLAIN, 7), 2.2f, 4f, 8, 2.0, 3.5, 0.3);
+                l.isolation(), l.grid(), font(Font.PLAIN, 7), 2.2f, 4f, 7.5, 2.0, 3.5, 0.3);
     }
 }

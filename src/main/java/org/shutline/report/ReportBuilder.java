@@ -19,7 +19,11 @@ import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
 import org.shutline.io.GeoPackageWriter;
 import org.shutline.io.WriteLayer;
+import org.shutline.model.Main;
 import org.shutline.model.Network;
+import org.shutline.model.NormalPosition;
+import org.shutline.model.Valve;
+import org.shutline.trace.NetworkState;
 import org.shutline.model.Progress;
 import org.shutline.model.Service;
 import org.shutline.render.GasOffArea;
@@ -107,6 +111,9 @@ public final class ReportBuilder {
         }
     }
 
+    /** The smallest width and height of the area of interest, in metres. */
+    public static final double MIN_AREA_M = 300;
+
     private final ReportView view;
     private final Path networkFile;
     private final PlanEvaluation.Result plan;
@@ -127,7 +134,7 @@ public final class ReportBuilder {
         this.options = Objects.requireNonNull(options, "options");
         this.network = view.state().network();
         this.geo = GeoTransform.forCrs(network.crs()).orElse(null);
-        MapPainter p = new MapPainter(new MapScene(network), MapSheet.printStyle());
+        MapPainter p = new MapPainter(new MapScene(drawn(view.state())), MapSheet.printStyle());
         this.painter = geo == null ? p : p.withGrid(new UsngGrid(geo));
         this.streets = new StreetLocator(network.context(), network.crs().unit());
         this.title = new TitleInfo(plan == null ? "Incident response: " + network.sourceName() : plan.states().plan().project(),
@@ -146,6 +153,30 @@ public final class ReportBuilder {
     /** The same with the evaluated plan the step belongs to (for the title, the charts and the input check). */
     public ReportBuilder withPlan(PlanEvaluation.Result r, Path file) {
         return new ReportBuilder(view, networkFile, r, file, options);
+    }
+
+    /**
+     * The network as it stands in a state, for drawing: each main with its status in the
+     * state and each valve open or closed as in the state (valves matched by id, the
+     * first of a repeated id). Pipes and valves a plan adds (bypasses) are not drawn.
+     */
+    static Network drawn(NetworkState s) {
+        Network n = s.network();
+        List<Main> mains = new ArrayList<>(n.mains().size());
+        for (int i = 0; i < n.mains().size(); i++) {
+            Main m = n.mains().get(i);
+            mains.add(i < s.mainCount() && s.mainStatus(i) != m.status() ? m.withStatus(s.mainStatus(i)) : m);
+        }
+        Map<String, Integer> index = ReportView.valveIndex(s);
+        List<Valve> valves = new ArrayList<>(n.valves().size());
+        for (Valve v : n.valves()) {
+            Integer k = index.get(v.id());
+            NormalPosition now = k == null ? v.normal() : s.valveClosed(k) ? NormalPosition.CLOSED : NormalPosition.OPEN;
+            valves.add(now == v.normal() ? v
+                    : new Valve(v.id(), v.systemId(), v.kind(), now, v.operable(), v.checked(), v.geometry()));
+        }
+        return new Network(n.sourceName(), n.crs(), mains, valves, n.stations(), n.taps(), n.services(), n.sources(),
+                n.context(), n.readFindings());
     }
 
     private static LocalDateTime modified(Path p) {
@@ -173,18 +204,28 @@ public final class ReportBuilder {
         return streets;
     }
 
-    /** The area of interest: gas-off extent, valves to operate, hazards and the isolation circle; else the whole network. */
+    /**
+     * The area of interest: the gas-off extent, the valves to operate and the isolation
+     * circle; when there are none, the hazards with a position; else the whole network.
+     * Grown to at least {@link #MIN_AREA_M} metres across so the streets around show.
+     */
     public Envelope area() {
         Envelope e = new Envelope(view.gasOff().getEnvelopeInternal());
         for (ReportView.OperatedValve v : view.valves()) e.expandToInclude(v.x(), v.y());
-        for (Hazard h : view.hazards()) if (Double.isFinite(h.x()) && Double.isFinite(h.y())) e.expandToInclude(h.x(), h.y());
         if (view.ring() != null) {
             double r = network.crs().unit().fromMetres(view.ring().radiusMetres());
             e.expandToInclude(new Envelope(view.ring().centerX() - r, view.ring().centerX() + r,
                     view.ring().centerY() - r, view.ring().centerY() + r));
         }
+        if (e.isNull()) {
+            for (Hazard h : view.hazards()) if (Double.isFinite(h.x()) && Double.isFinite(h.y())) e.expandToInclude(h.x(), h.y());
+        }
         if (e.isNull()) return new MapScene(network).extent();
-        if (e.getWidth() == 0 && e.getHeight() == 0) e.expandBy(network.crs().unit().fromMetres(100));
+        double min = network.crs().unit().fromMetres(MIN_AREA_M);
+        double cx = e.centre().x;
+        double cy = e.centre().y;
+        e.expandToInclude(cx - min / 2, cy - min / 2);
+        e.expandToInclude(cx + min / 2, cy + min / 2);
         return e;
     }
 
@@ -280,7 +321,9 @@ public final class ReportBuilder {
         PageFormat f = options.page();
         List<Sheet> out = new ArrayList<>(mapSheets());
         String sub = title.project() + " - " + view.subject();
-        out.addAll(TableSheets.layout("Valve operation list", sub, FieldLists.VALVE_HEADER, valveRows(), f));
+        List<List<String>> vr = valveRows();
+        if (vr.isEmpty()) vr = List.of(List.of("", "(no valves to operate in this view)"));
+        out.addAll(TableSheets.layout("Valve operation list", sub, FieldLists.VALVE_HEADER, vr, f));
         out.addAll(TableSheets.layout("Customers off gas (" + view.servicesOff().cardinality() + " services, "
                 + view.metersOff() + " meters)", sub, FieldLists.CUSTOMER_HEADER, customerRows(), f));
         if (!view.hazards().isEmpty()) out.addAll(TableSheets.layout("Hazards and actions", sub,
