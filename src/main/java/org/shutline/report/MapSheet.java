@@ -154,14 +154,14 @@ public final class MapSheet implements Sheet {
             Rectangle2D n = new Rectangle2D.Double(px, y + 190 + rest * 0.6 + 4, pw, rest * 0.4 - 4);
             return new Layout(frame, t, f, l, n);
         }
-        double ph = Math.min(230, h * 0.3);
+        double ph = Math.min(270, h * 0.34);
         double py = bottom - ph;
         Rectangle2D frame = new Rectangle2D.Double(MARGIN + GAP, MARGIN + GAP, w - 2 * (MARGIN + GAP), py - GAP - 6 - (MARGIN + GAP));
         double cw = (w - 2 * MARGIN - 8) / 2;
         Rectangle2D t = new Rectangle2D.Double(MARGIN, py, cw, 140);
         Rectangle2D f = new Rectangle2D.Double(MARGIN, py + 144, cw, 42);
-        Rectangle2D n = new Rectangle2D.Double(MARGIN + cw + 8, py + ph * 0.55, cw, ph * 0.45);
-        Rectangle2D l = new Rectangle2D.Double(MARGIN + cw + 8, py, cw, ph * 0.55 - 4);
+        Rectangle2D n = new Rectangle2D.Double(MARGIN, py + 190, cw, ph - 190);
+        Rectangle2D l = new Rectangle2D.Double(MARGIN + cw + 8, py, cw, ph);
         return new Layout(frame, t, f, l, n);
     }
 
