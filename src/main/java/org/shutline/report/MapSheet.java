@@ -170,7 +170,7 @@ public final class MapSheet implements Sheet {
         if (scale > 0) return scale;
         Layout lay = layout(w, h);
         Envelope e = new Envelope(area);
-        if (!e.isNull()) e.expandBy(Math.max(e.getWidth(), e.getHeight()) * 0.04);
+        if (!e.isNull()) e.expandBy(Math.max(e.getWidth(), e.getHeight()) * 0.08);
         return MapScales.fitting(e, lay.frame().getWidth(), lay.frame().getHeight(), unit());
     }
 

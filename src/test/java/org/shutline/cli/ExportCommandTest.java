@@ -237,6 +237,13 @@ class ExportCommandTest {
     }
 
     @Test
+    void defaultIsolationRadiusIsErgGuide115() {
+        // Emergency Response Guidebook (2024), Guide 115 (natural gas): initial isolation at least 100 m (330 ft)
+        var spec = Main.commandLine().getSubcommands().get("export").getCommandSpec();
+        assertThat(spec.findOption("--radius-m").defaultValue()).isEqualTo("100");
+    }
+
+    @Test
     void badOptionsExitTwo() {
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--out", dir.toString()).code()).isEqualTo(2);
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--at", INCIDENT, "--out", dir.toString(), "--paper", "b5").code())
