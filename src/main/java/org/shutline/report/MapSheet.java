@@ -345,14 +345,20 @@ public final class MapSheet implements Sheet {
         g.setFont(f);
         FontMetrics fm = g.getFontMetrics();
         int room = (int) ((r.getMaxY() - y) / fm.getHeight());
+        float x = (float) (r.getX() + 2);
         for (int i = 0; i < notes.size() && room > 0; i++) {
-            if (room == 1 && i < notes.size() - 1) {
-                g.drawString("... and " + (notes.size() - i) + " more (see the lists)", (float) (r.getX() + 2), (float) (y + fm.getAscent()));
+            List<String> ls = TableSheets.Footer.wrap(notes.get(i), fm, r.getWidth() - 12);
+            if (ls.size() > 2) ls = List.of(ls.get(0), TableSheets.fit(String.join(" ", ls.subList(1, ls.size())), fm, r.getWidth() - 12));
+            boolean last = i == notes.size() - 1;
+            if (room < ls.size() + (last ? 0 : 1)) {
+                g.drawString("... and " + (notes.size() - i) + " more (see the lists)", x, (float) (y + fm.getAscent()));
                 break;
             }
-            g.drawString(TableSheets.fit(notes.get(i), fm, r.getWidth() - 4), (float) (r.getX() + 2), (float) (y + fm.getAscent()));
-            y += fm.getHeight();
-            room--;
+            for (int k = 0; k < ls.size(); k++) {
+                g.drawString(ls.get(k), k == 0 ? x : x + 8, (float) (y + fm.getAscent()));
+                y += fm.getHeight();
+                room--;
+            }
         }
     }
 

@@ -290,7 +290,7 @@ public final class ReportBuilder {
             for (MapBook.Cell c : book.cells()) idx.add(new MapSheet.IndexCell(c.number(), c.ground()));
             overview = overview.withIndex(idx).withSheetLabel("Overview and sheet index (" + book.size() + " sheets)");
         } else {
-            overview = overview.withSheetLabel("Overview");
+            overview = overview.withSheetLabel("Map sheet 1 of 1");
         }
         out.add(overview);
         if (book.size() <= 1) return out;
