@@ -66,7 +66,8 @@ public final class Isolation {
             Objects.requireNonNull(inspectionInterval, "inspectionInterval");
         }
 
-        public static Options asOf(LocalDate date) {
+        /** The 15-month interval, never-checked valves overdue, checks measured at {@code date}. */
+        public static Options defaults(LocalDate date) {
             return new Options(date, DEFAULT_INSPECTION_INTERVAL, true);
         }
     }
@@ -133,6 +134,8 @@ public final class Isolation {
     private final Options options;
     private final BitSet before;
     private final int[] hops;
+    /** Built on the first point or polygon zone, then reused. */
+    private EdgeIndex index;
 
     public Isolation(ValveSegments segments, Options options) {
         this.segs = segments;
@@ -143,13 +146,19 @@ public final class Isolation {
         this.hops = hopsFromSources();
     }
 
+    /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
+    public static Isolation of(NetworkState state, Options options) {
+        return new Isolation(ValveSegments.build(state), options);
+    }
+
     /** Segments fed in the state before any closing. */
     public BitSet fedSegments() {
         return (BitSet) before.clone();
     }
 
     public Result isolate(Zone zone) {
-        BitSet zoneSegs = ZoneSegments.of(zone, segs);
+        if (index == null && !(zone instanceof Zone.OfSegments) && !(zone instanceof Zone.OfMains)) index = new EdgeIndex(segs);
+        BitSet zoneSegs = ZoneSegments.of(zone, segs, index);
         Core core = core(zoneSegs);
         List<Fallback> fallbacks = new ArrayList<>();
         Alternative alt = null;

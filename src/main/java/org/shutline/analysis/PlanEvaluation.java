@@ -58,7 +58,7 @@ public final class PlanEvaluation {
     public record StepResult(Step step, int servicesOff, long metersOff, Map<ServiceClass, Integer> servicesOffByClass,
                              List<CriticalOff> criticalOff, List<String> wentOff, List<String> cameBack,
                              Map<String, List<String>> districtFeeds, List<Hazard> hazards, List<Hazard> continuing,
-                             List<String> notices, Geometry gasOff, BitSet servicesOffSet, Suggestion suggestion) {
+                             List<String> notices, Lazy<Geometry> gasOffExtent, BitSet servicesOffSet, Suggestion suggestion) {
         public StepResult {
             servicesOffByClass = Map.copyOf(servicesOffByClass);
             criticalOff = List.copyOf(criticalOff);
@@ -73,6 +73,11 @@ public final class PlanEvaluation {
 
         @Override public BitSet servicesOffSet() { return (BitSet) servicesOffSet.clone(); }
 
+        /** The gas-off extent polygons (computed on first use: buffering is the costly part of a step). */
+        public Geometry gasOff() {
+            return gasOffExtent.get();
+        }
+
         public boolean hasCritical() {
             return hazards.stream().anyMatch(h -> h.severity() == Severity.CRITICAL);
         }
@@ -83,6 +88,27 @@ public final class PlanEvaluation {
         public Suggestion {
             order = List.copyOf(order);
             fallbacks = List.copyOf(fallbacks);
+        }
+    }
+
+    /** A value computed once, on first use; thread-safe. */
+    public static final class Lazy<T> {
+        private final java.util.function.Supplier<T> supplier;
+        private volatile T value;
+
+        Lazy(java.util.function.Supplier<T> supplier) {
+            this.supplier = supplier;
+        }
+
+        public T get() {
+            T v = value;
+            if (v == null) {
+                synchronized (this) {
+                    v = value;
+                    if (v == null) value = v = supplier.get();
+                }
+            }
+            return v;
         }
     }
 
@@ -127,7 +153,16 @@ public final class PlanEvaluation {
             BitSet off = (BitSet) baseFed.clone();
             off.andNot(tr.fedServices());
             Suggestion sug = Suggestions.forStep(st, settings);
-            out.add(result(st, net, off, prevOff, tr, fresh, cont, GasOffExtent.of(st.after(), baseLive, tr.liveEdges(), off, buffer), sug));
+            Lazy<Geometry> extent;
+            if (!out.isEmpty() && off.equals(prevOff) && tr.liveEdges().equals(prevTrace.liveEdges())) {
+                extent = out.get(out.size() - 1).gasOffExtent();
+            } else {
+                NetworkState after = st.after();
+                BitSet liveNow = tr.liveEdges();
+                BitSet offNow = (BitSet) off.clone();
+                extent = new Lazy<>(() -> GasOffExtent.of(after, baseLive, liveNow, offNow, buffer));
+            }
+            out.add(result(st, net, off, prevOff, tr, fresh, cont, extent, sug));
             prevOff = off;
             prevTrace = tr;
             progress.done(out.size() + 1L);
@@ -148,7 +183,7 @@ public final class PlanEvaluation {
     }
 
     private static StepResult result(StepState st, Network net, BitSet off, BitSet prevOff, FeedTrace.Result tr,
-                                     List<Hazard> fresh, List<Hazard> cont, Geometry gasOff, Suggestion sug) {
+                                     List<Hazard> fresh, List<Hazard> cont, Lazy<Geometry> gasOff, Suggestion sug) {
         List<Service> svc = net.services();
         Map<ServiceClass, Integer> byClass = new EnumMap<>(ServiceClass.class);
         List<CriticalOff> crit = new ArrayList<>();

@@ -2,22 +2,19 @@ package org.shutline.analysis;
 
 import java.util.BitSet;
 import java.util.HashSet;
-import java.util.List;
 import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Point;
-import org.locationtech.jts.linearref.LengthIndexedLine;
-import org.shutline.model.Main;
+import org.shutline.trace.EdgeGeometry;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
-import org.shutline.topology.EdgeKind;
 
 /**
  * Turns a {@link Zone} into the set of valve segments it touches. Point and polygon
- * zones read main geometry (base mains only: mains added by a plan step have none), so
- * they cost O(mains) geometry tests; main zones scan the state's edges, O(edges).
+ * zones use an {@link EdgeIndex} when one is given (O(log E + k)), else test every
+ * edge (O(E)); main zones scan the state's edges, O(E).
  */
 final class ZoneSegments {
     private static final GeometryFactory GF = new GeometryFactory();
@@ -25,6 +22,11 @@ final class ZoneSegments {
     private ZoneSegments() {}
 
     static BitSet of(Zone zone, ValveSegments segs) {
+        return of(zone, segs, null);
+    }
+
+    /** With a prebuilt edge index of the same segments (may be null): point and polygon zones then use it. */
+    static BitSet of(Zone zone, ValveSegments segs, EdgeIndex index) {
         NetworkState s = segs.state();
         BitSet out = new BitSet(segs.segmentCount());
         if (zone instanceof Zone.OfSegments z) {
@@ -37,6 +39,10 @@ final class ZoneSegments {
             for (int e = 0; e < s.edgeCount(); e++) {
                 if (segs.edgeSegment(e) >= 0 && ids.contains(s.mainId(s.edgeFeature(e)))) out.set(segs.edgeSegment(e));
             }
+        } else if (zone instanceof Zone.InPolygon z && index != null) {
+            for (int e : index.query(z.polygon().getEnvelopeInternal())) {
+                if (!out.get(segs.edgeSegment(e)) && edgeLine(s, e).intersects(z.polygon())) out.set(segs.edgeSegment(e));
+            }
         } else if (zone instanceof Zone.InPolygon z) {
             for (int e = 0; e < s.edgeCount(); e++) {
                 if (segs.edgeSegment(e) >= 0 && !out.get(segs.edgeSegment(e)) && edgeLine(s, e).intersects(z.polygon())) {
@@ -44,7 +50,7 @@ final class ZoneSegments {
                 }
             }
         } else if (zone instanceof Zone.AtPoint z) {
-            int e = nearestEdge(s, segs, z);
+            int e = index != null ? index.nearest(z.x(), z.y(), z.systemId()) : nearestEdge(s, segs, z);
             if (e >= 0) out.set(segs.edgeSegment(e));
         }
         return out;
@@ -71,19 +77,7 @@ final class ZoneSegments {
         return bestEdge;
     }
 
-    /** The line of one pipe edge: the piece of its main's part between m0 and m1, or the straight node-to-node line. */
     static Geometry edgeLine(NetworkState s, int e) {
-        if (s.edgeKind(e) != EdgeKind.PIPE) throw new IllegalArgumentException("not a pipe edge: " + e);
-        int main = s.edgeFeature(e);
-        List<Main> mains = s.network().mains();
-        if (main < mains.size()) {
-            Geometry g = mains.get(main).geometry();
-            if (g != null && s.edgePart(e) < g.getNumGeometries()) {
-                return new LengthIndexedLine(g.getGeometryN(s.edgePart(e))).extractLine(s.edgeM0(e), s.edgeM1(e));
-            }
-        }
-        int a = s.edgeFrom(e), b = s.edgeTo(e);
-        return GF.createLineString(new Coordinate[] {
-            new Coordinate(s.nodeX(a), s.nodeY(a)), new Coordinate(s.nodeX(b), s.nodeY(b))});
+        return EdgeGeometry.line(s, e);
     }
 }

@@ -54,9 +54,10 @@ public final class GenerateCommand implements Callable<Integer> {
         GeneratedTown town = mains == null ? SampleTown.generate(s) : GridTown.generate(mains, s);
         Format f = format != null ? format
             : out.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".gpkg") ? Format.gpkg : Format.shp;
+        Progress progress = mains == null ? Progress.NONE : new TextProgress(spec.commandLine().getErr());
         try {
-            if (f == Format.gpkg) town.writeGeoPackage(out, Progress.NONE);
-            else town.writeShapefiles(out, Progress.NONE);
+            if (f == Format.gpkg) town.writeGeoPackage(out, progress);
+            else town.writeShapefiles(out, progress);
         } catch (IOException e) {
             spec.commandLine().getErr().println("cannot write " + out + ": " + e.getMessage());
             return 2;

@@ -87,7 +87,7 @@ public final class IsolateCommand implements Callable<Integer> {
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
-        Isolation iso = new Isolation(segs, Isolation.Options.asOf(asOf == null ? LocalDate.now() : asOf));
+        Isolation iso = new Isolation(segs, Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf));
         Isolation.Result r;
         try {
             r = iso.isolate(zone);

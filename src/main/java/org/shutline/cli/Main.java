@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "shutline", mixinStandardHelpOptions = true, version = "shutline 0.1.0",
     description = "Gas distribution outage zoning: network check, feed trace, valve isolation, work plans, maps.",
-    subcommands = {CheckCommand.class, TraceCommand.class, IsolateCommand.class, PlanCommand.class, GenerateCommand.class, ExportCommand.class, CommandLine.HelpCommand.class})
+    subcommands = {CheckCommand.class, TraceCommand.class, IsolateCommand.class, PlanCommand.class, GenerateCommand.class, BenchCommand.class, PlanBenchCommand.class, ExportCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     /** Exit code for a failure inside Shutline itself (a bug), distinct from 1 (errors found) and 2 (bad input). */
     public static final int INTERNAL_ERROR = 3;

@@ -79,7 +79,7 @@ public final class TraceCommand implements Callable<Integer> {
         FeedTrace.Result tr = close.isEmpty() ? normal : FeedTrace.run(state);
         BitSet off = normal.fedServices();
         off.andNot(tr.fedServices());
-        BitSet unfed = tr.unfedServices(net.services().size());
+        BitSet unfed = tr.unfedServices();
         switch (format) {
             case json -> out.print(Json.write(json(net, tr, unfed, off)));
             case csv -> out.print(csv(net, tr));

@@ -49,18 +49,18 @@ public final class CrsWkt {
             b.append("PROJECTION[\"Transverse_Mercator\"],");
             param(b, esri ? "False_Easting" : "false_easting", p.getFalseEasting() / u);
             param(b, esri ? "False_Northing" : "false_northing", p.getFalseNorthing() / u);
-            param(b, esri ? "Central_Meridian" : "central_meridian", p.getProjectionLongitudeDegrees());
+            param(b, esri ? "Central_Meridian" : "central_meridian", deg(p.getProjectionLongitudeDegrees()));
             param(b, esri ? "Scale_Factor" : "scale_factor", p.getScaleFactor());
-            param(b, esri ? "Latitude_Of_Origin" : "latitude_of_origin", p.getProjectionLatitudeDegrees());
+            param(b, esri ? "Latitude_Of_Origin" : "latitude_of_origin", deg(p.getProjectionLatitudeDegrees()));
         } else if (p instanceof LambertConformalConicProjection) {
             b.append(esri ? "PROJECTION[\"Lambert_Conformal_Conic\"]," : "PROJECTION[\"Lambert_Conformal_Conic_2SP\"],");
             param(b, esri ? "False_Easting" : "false_easting", p.getFalseEasting() / u);
             param(b, esri ? "False_Northing" : "false_northing", p.getFalseNorthing() / u);
-            param(b, esri ? "Central_Meridian" : "central_meridian", p.getProjectionLongitudeDegrees());
-            param(b, esri ? "Standard_Parallel_1" : "standard_parallel_1", p.getProjectionLatitude1Degrees());
-            param(b, esri ? "Standard_Parallel_2" : "standard_parallel_2", p.getProjectionLatitude2Degrees());
+            param(b, esri ? "Central_Meridian" : "central_meridian", deg(p.getProjectionLongitudeDegrees()));
+            param(b, esri ? "Standard_Parallel_1" : "standard_parallel_1", deg(p.getProjectionLatitude1Degrees()));
+            param(b, esri ? "Standard_Parallel_2" : "standard_parallel_2", deg(p.getProjectionLatitude2Degrees()));
             if (esri) param(b, "Scale_Factor", p.getScaleFactor());
-            param(b, esri ? "Latitude_Of_Origin" : "latitude_of_origin", p.getProjectionLatitudeDegrees());
+            param(b, esri ? "Latitude_Of_Origin" : "latitude_of_origin", deg(p.getProjectionLatitudeDegrees()));
         } else {
             throw new IllegalArgumentException("no WKT form for the projection of " + crs.name() + ": " + p.getName());
         }
@@ -137,6 +137,11 @@ public final class CrsWkt {
 
     private static void param(StringBuilder b, String name, double v) {
         b.append("PARAMETER[\"").append(name).append("\",").append(num(v)).append("],");
+    }
+
+    /** Degrees rounded to 1e-12 (below 1e-7 m on the ground) to undo the radian round trip (-92.99999999999999). */
+    private static double deg(double v) {
+        return Math.round(v * 1e12) / 1e12;
     }
 
     private static String num(double v) {

@@ -42,7 +42,7 @@ public final class FeedTrace {
      */
     public record Result(BitSet liveNodes, BitSet fedServices, BitSet liveEdges, List<BitSet> stationServices,
                          List<BitSet> stationExclusive, List<BitSet> stationEdges, long[] stationMeters,
-                         long[] stationExclusiveMeters, BitSet multiFed, BitSet deadMains, long metersFed) {
+                         long[] stationExclusiveMeters, BitSet multiFed, BitSet unfedServices, BitSet deadMains, long metersFed) {
         public Result {
             liveNodes = (BitSet) liveNodes.clone();
             fedServices = (BitSet) fedServices.clone();
@@ -53,6 +53,7 @@ public final class FeedTrace {
             stationMeters = stationMeters.clone();
             stationExclusiveMeters = stationExclusiveMeters.clone();
             multiFed = (BitSet) multiFed.clone();
+            unfedServices = (BitSet) unfedServices.clone();
             deadMains = (BitSet) deadMains.clone();
         }
 
@@ -86,13 +87,8 @@ public final class FeedTrace {
         public boolean isFedThrough(int service, int station) { return stationServices.get(station).get(service); }
         public boolean isExclusiveTo(int service, int station) { return stationExclusive.get(station).get(service); }
 
-        /** Services not fed, of {@code serviceCount} (attached or not). */
-        public BitSet unfedServices(int serviceCount) {
-            BitSet b = new BitSet(serviceCount);
-            b.set(0, serviceCount);
-            b.andNot(fedServices);
-            return b;
-        }
+        /** Services not fed (unattached ones included). */
+        @Override public BitSet unfedServices() { return (BitSet) unfedServices.clone(); }
 
         /** Stations that reach a service, in index order. */
         public int[] stationsFeeding(int service) {
@@ -103,6 +99,16 @@ public final class FeedTrace {
             for (int st = 0; st < stationServices.size(); st++) if (stationServices.get(st).get(service)) out[c++] = st;
             return out;
         }
+    }
+
+    /**
+     * Only which services have gas: one search from the sources through live pipe, open
+     * valves and in-service stations, O(nodes + edges), without the per-station
+     * attribution of {@link #run}. For what-if checks that need no more.
+     */
+    public static BitSet fedServices(NetworkState s) {
+        Flow flow = new Flow(s, Progress.NONE);
+        return flow.fedServices(flow.reach(flow.sourceNodes(), -1));
     }
 
     public static Result run(NetworkState s) {
@@ -152,8 +158,11 @@ public final class FeedTrace {
         }
         BitSet multi = new BitSet(s.serviceCount());
         for (int i = 0; i < lastStageFeeds.length; i++) if (lastStageFeeds[i] >= 2) multi.set(i);
+        BitSet unfed = new BitSet(s.serviceCount());
+        unfed.set(0, s.serviceCount());
+        unfed.andNot(fed);
         return new Result(live, fed, liveEdges, stServices, stExclusive, stEdges, stMeters, stExMeters, multi,
-                deadMains(s, liveEdges), meters(services, fed));
+                unfed, deadMains(s, liveEdges), meters(services, fed));
     }
 
     private static BitSet liveEdges(NetworkState s, Flow flow, BitSet live, int m) {

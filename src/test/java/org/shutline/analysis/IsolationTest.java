@@ -14,7 +14,7 @@ import org.shutline.trace.FeedTrace;
 import org.shutline.trace.ValveSegments;
 
 class IsolationTest {
-    static final Isolation.Options OPTIONS = Isolation.Options.asOf(LocalDate.of(2026, 12, 1));
+    static final Isolation.Options OPTIONS = Isolation.Options.defaults(LocalDate.of(2026, 12, 1));
 
     /*
      *   A--1--b--2--c        segments (by hand):
@@ -107,7 +107,7 @@ class IsolationTest {
                 new Isolation.Options(LocalDate.of(2026, 12, 1), Isolation.DEFAULT_INSPECTION_INTERVAL, false));
         assertThat(lenient.isolate(Zone.point(120, 0)).fallbacks()).extracting(Isolation.Fallback::valveId)
                 .containsExactly("V2");
-        Isolation early = new Isolation(ValveSegments.build(t.state()), Isolation.Options.asOf(LocalDate.of(2026, 3, 1)));
+        Isolation early = new Isolation(ValveSegments.build(t.state()), Isolation.Options.defaults(LocalDate.of(2026, 3, 1)));
         assertThat(early.isolate(Zone.point(120, 0)).fallbacks()).extracting(Isolation.Fallback::valveId)
                 .containsExactly("V4");
     }

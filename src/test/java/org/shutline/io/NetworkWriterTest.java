@@ -144,6 +144,34 @@ class NetworkWriterTest {
         assertThat(parcels).contains("POLYGON ((500000 4900010,");
     }
 
+    /**
+     * A polygon with a hole given counter-clockwise shell / clockwise hole (JTS does not care),
+     * and a row without geometry: the shapefile needs the shell clockwise (ESRI 1998, p. 8) and
+     * a Null shape; GDAL must read the hole back as a hole and the row as having no geometry.
+     */
+    @Test
+    void polygonRingsAndNullShapes() throws Exception {
+        var shell = new Coordinate[] {new Coordinate(0, 0), new Coordinate(10, 0), new Coordinate(10, 10),
+            new Coordinate(0, 10), new Coordinate(0, 0)};
+        var hole = new Coordinate[] {new Coordinate(2, 2), new Coordinate(2, 4), new Coordinate(4, 4),
+            new Coordinate(4, 2), new Coordinate(2, 2)};
+        var poly = GF.createPolygon(GF.createLinearRing(shell), new org.locationtech.jts.geom.LinearRing[] {
+            GF.createLinearRing(hole)});
+        WriteLayer l = WriteLayer.of("blocks", WriteLayer.GeometryKind.POLYGON,
+            List.of(new WriteLayer.Column("name", WriteLayer.ColumnType.TEXT)),
+            java.util.Arrays.asList(poly, null), List.of(List.of("with hole"), java.util.Arrays.asList((Object) null)));
+        ShapefileWriter.write(dir, UTM15, List.of(l), org.shutline.model.Progress.NONE);
+        String out = ogrinfo("-al", dir.resolve("blocks.shp").toString());
+        assertThat(out).contains("Feature Count: 2", "name (String) = with hole");
+        assertThat(out).containsPattern("POLYGON \\(\\(0 0,0 10,10 10,10 0,0 0\\),\\(2 2,[^)]*\\)\\)");
+        // GDAL prints no geometry line for a Null shape: exactly one POLYGON for two features
+        assertThat(out.split("POLYGON", -1)).hasSize(2);
+        // .shx: 100-byte header + 8 bytes a record; the Null record's content is 4 bytes (2 words)
+        byte[] shx = Files.readAllBytes(dir.resolve("blocks.shx"));
+        assertThat(shx).hasSize(116);
+        assertThat(java.nio.ByteBuffer.wrap(shx, 112, 4).getInt()).isEqualTo(2);
+    }
+
     @Test
     void shortFieldNamesAreUnique() {
         List<WriteLayer.Column> cols = List.of(new WriteLayer.Column("monitor_kpa", WriteLayer.ColumnType.REAL),

@@ -76,6 +76,7 @@ class FeedTraceTest {
                 """);
         FeedTrace.Result r = FeedTrace.run(t.state());
         assertThat(t.serviceIds(r.fedServices())).containsExactly("s2");
+        assertThat(t.serviceIds(r.unfedServices())).containsExactly("s1");
         assertThat(r.isLive(t.node("a"))).isFalse();
         assertThat(r.isLive(t.node("b"))).isFalse();
         assertThat(r.isLive(t.node("d"))).isTrue();

@@ -66,7 +66,7 @@ public final class GridTown {
         for (int s = 0; s < stationCount; s++) {
             double x = x0 + s * 10 * b;
             String id = String.format("ST-%04d", s + 1);
-            ms.add(new Main("STUB-" + id, "LP-1", MainStatus.ACTIVE, "steel", 150.0, 7.0, 1990,
+            ms.add(new Main("STUB-" + id, "LP-1", MainStatus.ACTIVE, "steel", 150.0, SampleTown.LP_MAOP, 1990,
                 line(gf, x, ipY + 1.5, x, y0)));
             sts.add(new Station(id, "IP-1", "LP-1", 1.74, s % 2 == 0 ? 2.24 : null, 2.74, "Station " + (s + 1),
                 gf.createPoint(new Coordinate(x, ipY + 1.5))));
@@ -94,7 +94,7 @@ public final class GridTown {
     private static void addGrid(GeometryFactory gf, Random rnd, List<Main> ms, List<Valve> vs, List<Service> ss,
                                 double xa, double ya, double xb, double yb, int n) {
         String id = String.format("M-%07d", n);
-        ms.add(new Main(id, "LP-1", MainStatus.ACTIVE, "PE", 63.0, 7.0, 1970 + rnd.nextInt(55),
+        ms.add(new Main(id, "LP-1", MainStatus.ACTIVE, "PE", 63.0, SampleTown.LP_MAOP, 1970 + rnd.nextInt(55),
             line(gf, xa, ya, xb, yb)));
         double ux = (xb - xa) / 100;
         double uy = (yb - ya) / 100;

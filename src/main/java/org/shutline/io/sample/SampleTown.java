@@ -88,6 +88,8 @@ public final class SampleTown {
     static final double LP_OFF = 3;
     static final double IP_OFF = -3;
     static final double LP_KPA = 1.74; // 7 in w.c. (NIST SP 811: 7 x 249.0889 Pa)
+    /** MAOP of low-pressure mains: 0.5 psi = 14 in w.c. = 3.45 kPa, the usual low-pressure ceiling (trade-facts.md). */
+    static final double LP_MAOP = 3.45;
 
     private static final String[] EAST_WEST = {"Alder Row", "Birch Street", "Cedar Walk", "Damson Road",
         "Elder Street", "Fennel Way", "Gorse Avenue", "Hazel Row", "Juniper Street", "Larch Road", "Medlar Way",
@@ -128,6 +130,7 @@ public final class SampleTown {
         specialMains();
         stationsAndTaps();
         lpValves();
+        workValves();
         services();
         flaws();
         Network n = new Network(NAME, CRS, mains, valves, stations, taps, services, sources,
@@ -218,26 +221,26 @@ public final class SampleTown {
         }
         boolean old = rnd.nextInt(5) == 0;
         int i = addMain(nextMainId(prefix), sys, MainStatus.ACTIVE, old ? "steel" : "PE", old ? 100.0 : 63.0,
-            old ? 7.0 : 415.0, old ? 1961 + rnd.nextInt(20) : 1985 + rnd.nextInt(38), line(start, b));
+            LP_MAOP, old ? 1961 + rnd.nextInt(20) : 1985 + rnd.nextInt(38), line(start, b));
         serviceMains.add(new int[] {i, number});
         mainStreet.put(i, street);
     }
 
     private void specialMains() {
-        int ci = addMain(CAST_IRON_MAIN, "LP-SOUTH", MainStatus.ACTIVE, "cast iron", 100.0, 7.0, 1952,
+        int ci = addMain(CAST_IRON_MAIN, "LP-SOUTH", MainStatus.ACTIVE, "cast iron", 100.0, LP_MAOP, 1952,
             line(lp(3, 4), lp(4, 4), lp(5, 4)));
         serviceMains.add(new int[] {ci, 400});
         mainStreet.put(ci, EAST_WEST[4]);
         Coordinate p0 = lp(3, 4);
-        addMain(PROPOSED_MAIN, "LP-SOUTH", MainStatus.PROPOSED, "PE", 110.0, 7.0, null,
+        addMain(PROPOSED_MAIN, "LP-SOUTH", MainStatus.PROPOSED, "PE", 110.0, LP_MAOP, null,
             line(new Coordinate(p0.x + 5, p0.y - 4), new Coordinate(p0.x + 195, p0.y - 4)));
         Coordinate n0 = lp(13, 4);
-        int nm = addMain(NEAR_MISS_MAIN, "LP-EAST", MainStatus.ACTIVE, "PE", 63.0, 415.0, 2004,
+        int nm = addMain(NEAR_MISS_MAIN, "LP-EAST", MainStatus.ACTIVE, "PE", 63.0, LP_MAOP, 2004,
             line(n0, new Coordinate(n0.x + BLOCK - 1.2, n0.y)));
         serviceMains.add(new int[] {nm, 1400});
         mainStreet.put(nm, EAST_WEST[4]);
         double ax = X0 + 5 * BLOCK + 53;
-        int al = addMain(CROSSING_MAIN, "LP-NORTH", MainStatus.ACTIVE, "PE", 63.0, 415.0, 1999,
+        int al = addMain(CROSSING_MAIN, "LP-NORTH", MainStatus.ACTIVE, "PE", 63.0, LP_MAOP, 1999,
             line(new Coordinate(ax, Y0 + 8 * BLOCK + LP_OFF), new Coordinate(ax, Y0 + 10 * BLOCK + LP_OFF)));
         serviceMains.add(new int[] {al, 800});
         mainStreet.put(al, "Cooper Yard");
@@ -261,7 +264,7 @@ public final class SampleTown {
     }
 
     private void station(String id, String out, String name, Coordinate node, Coordinate at, Double mon, Double rel) {
-        addMain("M-STUB-" + id.substring(3), out, MainStatus.ACTIVE, "steel", 150.0, 7.0, 1990, line(at, node));
+        addMain("M-STUB-" + id.substring(3), out, MainStatus.ACTIVE, "steel", 150.0, LP_MAOP, 1990, line(at, node));
         stations.add(new Station(id, "IP-1", out, LP_KPA, mon, rel, name, point(at.x, at.y)));
         // inlet valve on IP-1, 1 m along the main from the station's projection: 1.80 m from the station
         boolean vertical = at.x == X0 + 998.5;
@@ -299,7 +302,7 @@ public final class SampleTown {
     private void lpValves() {
         List<int[]> candidates = new ArrayList<>(serviceMains);
         int placed = 0;
-        for (int j = 0; j < candidates.size() && placed < 44; j++) {
+        for (int j = 0; j < candidates.size() && placed < 36; j++) {
             int[] m = candidates.get((j * 37) % candidates.size());
             Main main = mains.get(m[0]);
             if (main.id().equals(CROSSING_MAIN) || main.id().equals(NEAR_MISS_MAIN)) continue;
@@ -309,6 +312,51 @@ public final class SampleTown {
         // two normally closed valves in LP-NORTH
         closeValve(nearestValve("LP-NORTH", lp(7, 9)));
         closeValve(nearestValve("LP-NORTH", lp(8, 10)));
+    }
+
+    /**
+     * Valves for the sample work plan (operable, checked two months before {@link #AS_OF}):
+     * four around each end junction of the cast-iron main (Elder Street at Tannery Lane and
+     * at Weir Lane), 4-7 m from the junction on every main that meets there, so a junction
+     * can be isolated for a tie-in; and one on the Cooper Street main 4 m north of its tee
+     * on the cast-iron main.
+     */
+    private void workValves() {
+        LocalDate checked = AS_OF.minusMonths(2);
+        Coordinate w = lp(3, 4);
+        Coordinate e = lp(5, 4);
+        Coordinate c = lp(4, 4);
+        String[][] ids = {{"V-TAN-N", "V-TAN-S", "V-ELD-W", "V-CI-W"}, {"V-WEI-N", "V-WEI-S", "V-CI-E", "V-ELD-E"}};
+        Coordinate[] ends = {w, e};
+        for (int k = 0; k < 2; k++) {
+            Coordinate j = ends[k];
+            double[][] at = {{j.x, j.y + 4}, {j.x, j.y - 9}, {j.x - 4, j.y}, {j.x + 4, j.y}};
+            for (int i = 0; i < 4; i++) {
+                valves.add(new Valve(ids[k][i], "LP-SOUTH", ValveKind.MAIN, NormalPosition.OPEN, Operability.YES, checked,
+                    onMain("LP-SOUTH", at[i][0], at[i][1])));
+            }
+        }
+        valves.add(new Valve("V-COO-N", "LP-SOUTH", ValveKind.MAIN, NormalPosition.OPEN, Operability.YES, checked,
+            onMain("LP-SOUTH", c.x, c.y + 4)));
+    }
+
+    /** The point of the nearest main of {@code sys} to (x, y), so a valve lies exactly on its main. */
+    private Point onMain(String sys, double x, double y) {
+        Point q = point(x, y);
+        Main best = null;
+        double d = Double.MAX_VALUE;
+        for (Main m : mains) {
+            if (!m.systemId().equals(sys)) continue;
+            double dm = m.geometry().distance(q);
+            if (dm < d) {
+                d = dm;
+                best = m;
+            }
+        }
+        if (best == null) throw new IllegalStateException("no main of " + sys);
+        LengthIndexedLine lil = new LengthIndexedLine(best.geometry());
+        Coordinate c = lil.extractPoint(lil.project(q.getCoordinate()));
+        return point(c.x, c.y);
     }
 
     private int nearestValve(String sys, Coordinate c) {

@@ -69,6 +69,36 @@ class SampleTownTest {
         }
     }
 
+    /** The committed sample files are what the generator writes today (regenerate them when it changes). */
+    @Test
+    void committedSampleShapefilesAreCurrent() throws Exception {
+        Path committed = Path.of("sample-gis", "tallowmere-shp");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isDirectory(committed), "sample-gis not present: skipped");
+        TOWN.writeShapefiles(dir.resolve("now"), org.shutline.model.Progress.NONE);
+        for (String layer : List.of("mains", "valves", "services", "stations", "sense_taps", "sources", "streets")) {
+            for (String ext : List.of("shp", "shx", "prj", "cpg")) {
+                assertThat(Files.readAllBytes(committed.resolve(layer + "." + ext))).as(layer + "." + ext
+                    + " differs: run ./shutline generate sample-gis/tallowmere-shp (and .gpkg)")
+                    .isEqualTo(Files.readAllBytes(dir.resolve("now").resolve(layer + "." + ext)));
+            }
+        }
+        assertThat(Files.size(Path.of("sample-gis", "tallowmere.gpkg"))).isGreaterThan(100_000);
+    }
+
+    /** GDAL's ogrinfo sees the raw misspelt word and the CRS in both committed files. */
+    @Test
+    void committedFilesCarryTheRawWordInGdal() throws Exception {
+        Path ogrinfo = Path.of("/usr/bin/ogrinfo");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.isExecutable(ogrinfo), "ogrinfo not installed: skipped");
+        for (String f : List.of("sample-gis/tallowmere.gpkg", "sample-gis/tallowmere-shp")) {
+            Process p = new ProcessBuilder(ogrinfo.toString(), "-ro", "-al", f, "mains", "-where",
+                "main_id = '" + SampleTown.MISSPELT_MAIN + "'").redirectErrorStream(true).start();
+            String out = new String(p.getInputStream().readAllBytes());
+            assertThat(p.waitFor()).as(out).isZero();
+            assertThat(out).as(f).contains("Feature Count: 1", "status (String) = actve", "UTM zone 15N");
+        }
+    }
+
     @Test
     void countsTheDemoNeeds() {
         assertThat(N.services()).hasSizeBetween(1400, 1600);

@@ -1,0 +1,234 @@
+package org.shutline.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryMXBean;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Random;
+import java.util.concurrent.Callable;
+import java.util.stream.Stream;
+import org.shutline.analysis.BruteForceOutages;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.OutageTables;
+import org.shutline.analysis.Zone;
+import org.shutline.io.FieldMapping;
+import org.shutline.io.InputException;
+import org.shutline.io.NetworkReader;
+import org.shutline.io.sample.GeneratedTown;
+import org.shutline.io.sample.GridTown;
+import org.shutline.model.Network;
+import org.shutline.model.Progress;
+import org.shutline.model.Tolerances;
+import org.shutline.topology.NetworkBuilder;
+import org.shutline.topology.Topology;
+import org.shutline.trace.FeedTrace;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.ValveSegments;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline bench [--sizes 3000,200000,1000000] [--zones 1000] [--seed S] [--work DIR]}:
+ * generates synthetic grid towns, writes each as a GeoPackage, and measures on it: the
+ * raw read of all features (baseline 1), load plus topology build, feed trace (live set
+ * only, and with per-station attribution), single isolations of random points (median
+ * and 95th percentile, whole-network scope), the all-cases tables against the plain
+ * per-segment traversal loop (baseline 2; sampled and extrapolated on large networks),
+ * and heap in use. Prints a Markdown table (docs/performance.md explains it).
+ * Times are wall-clock on this machine; read the ratios, which hold on a noisy machine.
+ */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+    description = "Benchmark load, topology, trace, isolation and all-cases tables on generated networks.")
+public final class BenchCommand implements Callable<Integer> {
+    @Spec private CommandSpec spec;
+
+    @Option(names = "--sizes", split = ",", defaultValue = "3000,200000,1000000", description = "numbers of mains (default: ${DEFAULT-VALUE})")
+    private List<Integer> sizes;
+
+    @Option(names = "--zones", defaultValue = "1000", description = "random isolations per network (default: ${DEFAULT-VALUE})")
+    private int zones;
+
+    @Option(names = "--seed", defaultValue = "7", description = "random seed (default: ${DEFAULT-VALUE})")
+    private long seed;
+
+    @Option(names = "--brute-sample", defaultValue = "400", description = "segments timed for the brute-force baseline on large networks (default: ${DEFAULT-VALUE})")
+    private int bruteSample;
+
+    @Option(names = "--work", paramLabel = "DIR", description = "folder for the generated files (default: a temporary folder, deleted after)")
+    private Path work;
+
+    /** One network's figures, times in milliseconds. */
+    record Row(int mains, int nodes, int edges, int services, int segments, double rawRead, double loadTopo, double traceLive,
+               double traceFull, double isoMedian, double isoP95, double tables, double brute, boolean bruteSampled, double heapMb) {
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter out = spec.commandLine().getOut();
+        Path dir = work != null ? Files.createDirectories(work) : Files.createTempDirectory("shutline-bench");
+        List<Row> rows = new ArrayList<>();
+        try {
+            for (int n : sizes) {
+                out.println("generating and measuring " + n + " mains ...");
+                out.flush();
+                rows.add(measure(n, dir));
+                out.println(line(rows.get(rows.size() - 1)));
+                out.flush();
+            }
+        } finally {
+            if (work == null) deleteTree(dir);
+        }
+        out.println();
+        out.print(table(rows));
+        out.flush();
+        return 0;
+    }
+
+    private Row measure(int n, Path dir) throws IOException, InputException {
+        Path file = dir.resolve("grid-" + n + ".gpkg");
+        if (!Files.exists(file)) {
+            GeneratedTown town = GridTown.generate(n, seed);
+            town.writeGeoPackage(file, Progress.NONE);
+        }
+        // baseline 1: the raw read of all features into the model, no graph (best of two, the first also warms up)
+        double raw = Double.MAX_VALUE;
+        for (int i = 0; i < 2; i++) {
+            gc();
+            long t0 = System.nanoTime();
+            Network net = NetworkReader.read(file, FieldMapping.DEFAULT);
+            raw = Math.min(raw, ms(t0));
+            if (net.mains().isEmpty()) throw new IllegalStateException("no mains read");
+        }
+        gc();
+        long t0 = System.nanoTime();
+        Network net2 = NetworkReader.read(file, FieldMapping.DEFAULT);
+        Topology topo = NetworkBuilder.build(net2, Tolerances.DEFAULT);
+        double loadTopo = ms(t0);
+        NetworkState state = NetworkState.of(topo);
+
+        double live = best(3, () -> FeedTrace.fedServices(state));
+        double full = best(1, () -> FeedTrace.run(state));
+
+        ValveSegments segs = ValveSegments.build(state);
+        Isolation iso = new Isolation(segs, Isolation.Options.defaults(LocalDate.of(2026, 12, 1)));
+        double[] isoTimes = isolations(topo, iso);
+
+        t0 = System.nanoTime();
+        OutageTables tables = OutageTables.build(segs);
+        double tablesMs = ms(t0);
+        double bruteMs = bruteForce(segs, topo.graph().stationCount(), topo.graph().valveCount());
+        int segCount = segs.segmentCount();
+        boolean sampled = segCount > bruteSample * 2;
+        if (tables.unitCount() < 0) throw new IllegalStateException();
+
+        MemoryMXBean mem = ManagementFactory.getMemoryMXBean();
+        gc();
+        double heap = mem.getHeapMemoryUsage().getUsed() / 1048576.0;
+        return new Row(n, topo.graph().nodeCount(), topo.graph().edgeCount(), net2.services().size(), segCount, raw, loadTopo,
+                live, full, isoTimes[0], isoTimes[1], tablesMs, bruteMs, sampled, heap);
+    }
+
+    /**
+     * Baseline 2: the plain loop, one traversal of the segment graph per case, over the
+     * same cases as the tables (every segment isolated, every station out, every valve
+     * failing). On large networks each kind is timed on a random sample and scaled.
+     */
+    private double bruteForce(ValveSegments segs, int stations, int valves) {
+        BruteForceOutages brute = new BruteForceOutages(segs);
+        Random rnd = new Random(seed);
+        long sink = 0;
+        double total = 0;
+        int[] counts = {segs.segmentCount(), stations, valves};
+        for (int kind = 0; kind < 3; kind++) {
+            int n = counts[kind];
+            if (n == 0) continue;
+            boolean sample = n > bruteSample * 2;
+            int cases = sample ? bruteSample : n;
+            long t0 = System.nanoTime();
+            for (int i = 0; i < cases; i++) {
+                int c = sample ? rnd.nextInt(n) : i;
+                sink += kind == 0 ? brute.servicesOffWhenIsolated(c) : kind == 1 ? brute.servicesOffWhenStationOut(c) : brute.servicesOffWhenFails(c);
+            }
+            total += ms(t0) * ((double) n / cases);
+        }
+        if (sink < 0) throw new IllegalStateException();
+        return total;
+    }
+
+    private double[] isolations(Topology topo, Isolation iso) {
+        Random rnd = new Random(seed);
+        org.locationtech.jts.geom.Envelope env = new org.locationtech.jts.geom.Envelope();
+        for (var m : topo.network().mains()) env.expandToInclude(m.geometry().getEnvelopeInternal());
+        int warm = Math.min(50, zones);
+        for (int i = 0; i < warm; i++) iso.isolate(randomZone(rnd, env));
+        double[] t = new double[zones];
+        for (int i = 0; i < zones; i++) {
+            Zone z = randomZone(rnd, env);
+            long t0 = System.nanoTime();
+            iso.isolate(z);
+            t[i] = ms(t0);
+        }
+        Arrays.sort(t);
+        return new double[] {t[zones / 2], t[(int) Math.min(zones - 1, Math.ceil(zones * 0.95) - 1)]};
+    }
+
+    private static Zone randomZone(Random rnd, org.locationtech.jts.geom.Envelope env) {
+        return new Zone.AtPoint(env.getMinX() + rnd.nextDouble() * env.getWidth(), env.getMinY() + rnd.nextDouble() * env.getHeight(), null);
+    }
+
+    private static double best(int runs, Runnable r) {
+        double best = Double.MAX_VALUE;
+        for (int i = 0; i < runs; i++) {
+            long t0 = System.nanoTime();
+            r.run();
+            best = Math.min(best, ms(t0));
+        }
+        return best;
+    }
+
+    private static double ms(long t0) {
+        return (System.nanoTime() - t0) / 1e6;
+    }
+
+    private static void gc() {
+        System.gc();
+        System.gc();
+    }
+
+    static String line(Row r) {
+        return String.format(Locale.ROOT, "  %d mains: read %.0f ms, load+topology %.0f ms (%.2fx), trace %.1f ms live / %.0f ms full, "
+                        + "isolation median %.3f ms p95 %.3f ms, tables %.0f ms vs brute force %.0f ms%s (%.0fx), heap %.0f MB",
+                r.mains(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(),
+                r.tables(), r.brute(), r.bruteSampled() ? " (extrapolated)" : "", r.brute() / r.tables(), r.heapMb());
+    }
+
+    static String table(List<Row> rows) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("| mains | nodes | edges | services | segments | raw read ms | load+topology ms | ratio | trace live ms | trace with stations ms | isolation median ms | isolation p95 ms | all-cases tables ms | brute force ms | speed-up | heap MB |\n");
+        sb.append("|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|\n");
+        for (Row r : rows) {
+            sb.append(String.format(Locale.ROOT, "| %d | %d | %d | %d | %d | %.0f | %.0f | %.2f | %.1f | %.0f | %.3f | %.3f | %.0f | %.0f%s | %.0fx | %.0f |%n",
+                    r.mains(), r.nodes(), r.edges(), r.services(), r.segments(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(),
+                    r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.tables(), r.brute(), r.bruteSampled() ? "*" : "",
+                    r.brute() / r.tables(), r.heapMb()));
+        }
+        sb.append("\n`*` brute force timed on a random sample of segments and scaled to all segments.\n");
+        return sb.toString();
+    }
+
+    private static void deleteTree(Path dir) throws IOException {
+        try (Stream<Path> s = Files.walk(dir)) {
+            for (Path p : (Iterable<Path>) s.sorted(Comparator.reverseOrder())::iterator) Files.deleteIfExists(p);
+        }
+    }
+}
