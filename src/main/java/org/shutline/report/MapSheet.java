@@ -147,20 +147,20 @@ public final class MapSheet implements Sheet {
             Rectangle2D frame = new Rectangle2D.Double(MARGIN + GAP, MARGIN + GAP, px - GAP - (MARGIN + GAP) - 6,
                     bottom - GAP - (MARGIN + GAP));
             double y = MARGIN;
-            Rectangle2D t = new Rectangle2D.Double(px, y, pw, 140);
-            Rectangle2D f = new Rectangle2D.Double(px, y + 144, pw, 42);
-            double rest = bottom - (y + 190);
-            Rectangle2D l = new Rectangle2D.Double(px, y + 190, pw, rest * 0.6);
-            Rectangle2D n = new Rectangle2D.Double(px, y + 190 + rest * 0.6 + 4, pw, rest * 0.4 - 4);
+            Rectangle2D t = new Rectangle2D.Double(px, y, pw, 158);
+            Rectangle2D f = new Rectangle2D.Double(px, y + 162, pw, 42);
+            double rest = bottom - (y + 208);
+            Rectangle2D l = new Rectangle2D.Double(px, y + 208, pw, rest * 0.6);
+            Rectangle2D n = new Rectangle2D.Double(px, y + 208 + rest * 0.6 + 4, pw, rest * 0.4 - 4);
             return new Layout(frame, t, f, l, n);
         }
         double ph = Math.min(270, h * 0.34);
         double py = bottom - ph;
         Rectangle2D frame = new Rectangle2D.Double(MARGIN + GAP, MARGIN + GAP, w - 2 * (MARGIN + GAP), py - GAP - 6 - (MARGIN + GAP));
         double cw = (w - 2 * MARGIN - 8) / 2;
-        Rectangle2D t = new Rectangle2D.Double(MARGIN, py, cw, 140);
-        Rectangle2D f = new Rectangle2D.Double(MARGIN, py + 144, cw, 42);
-        Rectangle2D n = new Rectangle2D.Double(MARGIN, py + 190, cw, ph - 190);
+        Rectangle2D t = new Rectangle2D.Double(MARGIN, py, cw, 158);
+        Rectangle2D f = new Rectangle2D.Double(MARGIN, py + 162, cw, 42);
+        Rectangle2D n = new Rectangle2D.Double(MARGIN, py + 208, cw, ph - 208);
         Rectangle2D l = new Rectangle2D.Double(MARGIN + cw + 8, py, cw, ph);
         return new Layout(frame, t, f, l, n);
     }
@@ -346,6 +346,7 @@ public final class MapSheet implements Sheet {
         FontMetrics fm = g.getFontMetrics();
         int room = (int) ((r.getMaxY() - y) / fm.getHeight());
         float x = (float) (r.getX() + 2);
+        if (notes.isEmpty() && room > 0) g.drawString("(none)", x, (float) (y + fm.getAscent()));
         for (int i = 0; i < notes.size() && room > 0; i++) {
             List<String> ls = TableSheets.Footer.wrap(notes.get(i), fm, r.getWidth() - 12);
             if (ls.size() > 2) ls = List.of(ls.get(0), TableSheets.fit(String.join(" ", ls.subList(1, ls.size())), fm, r.getWidth() - 12));

@@ -324,8 +324,10 @@ public final class ReportBuilder {
         List<List<String>> vr = valveRows();
         if (vr.isEmpty()) vr = List.of(List.of("", "(no valves to operate in this view)"));
         out.addAll(TableSheets.layout("Valve operation list", sub, FieldLists.VALVE_HEADER, vr, f));
+        List<List<String>> cr = customerRows();
+        if (cr.isEmpty()) cr = List.of(List.of("", "(no customers off gas in this view)"));
         out.addAll(TableSheets.layout("Customers off gas (" + view.servicesOff().cardinality() + " services, "
-                + view.metersOff() + " meters)", sub, FieldLists.CUSTOMER_HEADER, customerRows(), f));
+                + view.metersOff() + " meters)", sub, FieldLists.CUSTOMER_HEADER, cr, f));
         if (!view.hazards().isEmpty()) out.addAll(TableSheets.layout("Hazards and actions", sub,
                 List.of("code", "severity", "features", "what is wrong", "action"), hazardRows(), f));
         if (plan != null) {

@@ -29,14 +29,17 @@ import org.shutline.model.Caution;
 
 /**
  * End to end on the sample network (sample-gis/tallowmere.gpkg, UTM zone 15N): an
- * incident at a point on the LP-SOUTH district and step 1 of a small test plan (close
- * V-020 and V-021 in the suggested order), exported through {@code shutline export}
+ * incident at a point on the LP-SOUTH district and step 1 of the sample plan
+ * (sample-gis/tallowmere-plan.yaml: close V-TAN-N, V-TAN-S, V-ELD-W, V-CI-W in the
+ * order Shutline suggests), exported through {@code shutline export}
  * and read back with PDFBox, GDAL's ogrinfo, poppler's pdftoppm and GeographicLib's
  * GeoConvert (each skipped visibly when missing).
  */
 class ExportCommandTest {
     static final Path SAMPLE = Path.of("sample-gis/tallowmere.gpkg");
-    static final Path PLAN = Path.of("src/test/resources/org/shutline/report/sample-test-plan.yaml");
+    static final Path PLAN = Path.of("sample-gis/tallowmere-plan.yaml");
+    /** The order the plan command suggests for step 1 ("suggested order" in {@code shutline plan}). */
+    static final List<String> STEP1 = List.of("V-ELD-W", "V-TAN-N", "V-TAN-S", "V-CI-W");
     /** On Elder Street (row 4 of the sample grid), inside LP-SOUTH, 47 m east of Kiln Street. */
     static final String INCIDENT = "512250,4890203";
 
@@ -45,6 +48,7 @@ class ExportCommandTest {
     static Path step;
     static CommandsTest.Run incidentRun;
     static CommandsTest.Run stepRun;
+    static JsonNode isolation;
 
     @BeforeAll
     static void export() {
@@ -54,6 +58,13 @@ class ExportCommandTest {
                 "--as-of", "2026-12-01", "--prepared-by", "R. Tester", "--formats", "pdf,gpkg,geojson,csv");
         stepRun = CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "1", "--out",
                 step.toString(), "--as-of", "2026-12-01", "--paper", "a4", "--portrait", "--dpi", "50");
+        CommandsTest.Run iso = CommandsTest.run("isolate", SAMPLE.toString(), "--at", INCIDENT, "--as-of", "2026-12-01",
+                "--format", "json");
+        try {
+            isolation = new ObjectMapper().readTree(iso.out());
+        } catch (IOException e) {
+            throw new IllegalStateException("isolate --format json did not print JSON: " + iso.out() + iso.err(), e);
+        }
     }
 
     static boolean tool(String name) {
@@ -104,7 +115,9 @@ class ExportCommandTest {
             assertThat(oneLine(page1)).contains(oneLine(Caution.TEXT));
             String all = text(doc, 1, doc.getNumberOfPages());
             assertThat(all).contains("Sheet 2 of").contains("continued on sheet").contains("Valve operation list")
-                    .contains("Customers off gas (514 services, 653 meters)").contains("station-feeds-zone");
+                    .contains("Customers off gas (" + isolation.get("services_off").asInt() + " services, "
+                            + isolation.get("meters_off").asLong() + " meters)") // the same as shutline isolate says
+                    .contains("station-feeds-zone");
             // every page carries the caution
             for (int p = 1; p <= doc.getNumberOfPages(); p++) {
                 assertThat(oneLine(text(doc, p, p))).as("page %d", p).contains("CAUTION: Results depend on the completeness");
@@ -119,9 +132,10 @@ class ExportCommandTest {
             assertThat(doc.getPage(0).getMediaBox().getWidth()).isCloseTo(595.28f, org.assertj.core.data.Offset.offset(0.01f));
             assertThat(doc.getPage(0).getMediaBox().getHeight()).isCloseTo(841.89f, org.assertj.core.data.Offset.offset(0.01f));
             String page1 = oneLine(text(doc, 1, 1));
-            assertThat(page1).contains("Cast-iron renewal on the south district (test plan)")
-                    .contains("Phase: 1 Isolate and abandon").contains("Step 1: close V-020, V-021")
-                    .contains("Valve to close").contains("1. close V-020").contains("2. close V-021");
+            assertThat(page1).contains("Elder Street cast-iron renewal (Tallowmere)")
+                    .contains("Phase: 1 West tie-in at Tannery Lane").contains("Step 1: close V-TAN-N, V-TAN-S, V-ELD-W, V-CI-W")
+                    .contains("Valve to close");
+            for (int i = 0; i < STEP1.size(); i++) assertThat(page1).contains((i + 1) + ". close " + STEP1.get(i));
             String all = text(doc, 1, doc.getNumberOfPages());
             assertThat(all).contains("Valve operation list").contains("Services and meters off gas per step")
                     .contains("Customer-hours off gas per phase");
@@ -129,9 +143,10 @@ class ExportCommandTest {
         List<String> csv = Files.readAllLines(step.resolve("valves.csv"));
         assertThat(csv.get(0)).isEqualTo("order,valve,grid reference (USNG),location,kind,operable,last inspection,action,if it fails, close"
                 .replace("if it fails, close", "\"if it fails, close\""));
-        assertThat(csv).hasSize(3);
-        assertThat(csv.get(1)).startsWith("1,V-020,15T WJ ").contains(",close,");
-        assertThat(csv.get(2)).startsWith("2,V-021,15T WJ ").contains(",close,");
+        assertThat(csv).hasSize(1 + STEP1.size());
+        for (int i = 0; i < STEP1.size(); i++) {
+            assertThat(csv.get(i + 1)).startsWith((i + 1) + "," + STEP1.get(i) + ",15T WJ ").contains(",close,");
+        }
         assertThat(csv.get(1)).containsPattern(",\"on [A-Z][a-z]+ [A-Z][a-z]+, \\d+ m (north|south|east|west) of [A-Z][a-z]+ [A-Z][a-z]+\",");
     }
 
@@ -140,7 +155,7 @@ class ExportCommandTest {
         assumeTrue(tool("GeoConvert"), "GeoConvert (geographiclib-tools) not installed: skipped");
         JsonNode fc = new ObjectMapper().readTree(step.resolve("valves_to_operate.geojson").toFile());
         List<String> csv = Files.readAllLines(step.resolve("valves.csv"));
-        for (int i = 0; i < 2; i++) {
+        for (int i = 0; i < STEP1.size(); i++) {
             JsonNode c = fc.get("features").get(i).get("geometry").get("coordinates");
             // GeographicLib GeoConvert: UTM zone 15 north input (the network CRS), MGRS out at 10 m (-p -1)
             String ref = exec(String.format(java.util.Locale.ROOT, "15n %.3f %.3f%n", c.get(0).asDouble(), c.get(1).asDouble()),
@@ -181,7 +196,7 @@ class ExportCommandTest {
                 "station_sheds", "isolation_circle");
         assertThat(inc.get("gas_off")).containsExactly("Multi Polygon", "1", "32615");
         assertThat(inc.get("valves_to_operate")).containsExactly("Point", "0", "32615");
-        assertThat(inc.get("affected_services")).containsExactly("Point", "514", "32615");
+        assertThat(inc.get("affected_services")).containsExactly("Point", isolation.get("services_off").asText(), "32615");
         assertThat(inc.get("hazards")).containsExactly("Point", "1", "32615");
         // ST-S1 is stopped for the incident: the other three stations have sheds
         assertThat(inc.get("station_sheds")).containsExactly("Multi Polygon", "3", "32615");
@@ -191,12 +206,12 @@ class ExportCommandTest {
         assertThat(circle).contains("radius_m (Real) = 100").contains("Guide 115");
         Map<String, String[]> st = layers(exec(null, "ogrinfo", "-so", "-al", step.resolve("results.gpkg").toString()));
         // nothing is off at step 1: the empty layer gets GeoPackageWriter's default type for its kind, Polygon
-        assertThat(st.get("gas_off")).containsExactly("Polygon", "0", "32615");
-        assertThat(st.get("valves_to_operate")).containsExactly("Point", "2", "32615");
+        assertThat(st.get("gas_off")).containsExactly("Multi Polygon", "1", "32615"); // one service off at step 1
+        assertThat(st.get("valves_to_operate")).containsExactly("Point", "4", "32615");
         assertThat(st.keySet()).doesNotContain("isolation_circle");
         String valves = exec(null, "ogrinfo", "-al", "-q", step.resolve("results.gpkg").toString(), "valves_to_operate");
-        assertThat(valves).contains("valve_id (String) = V-020").contains("step (Integer) = 1")
-                .contains("phase (String) = 1 Isolate and abandon").contains("action (String) = close");
+        assertThat(valves).contains("valve_id (String) = V-ELD-W").contains("step (Integer) = 1")
+                .contains("phase (String) = 1 West tie-in at Tannery Lane").contains("action (String) = close");
     }
 
     @Test
@@ -204,7 +219,7 @@ class ExportCommandTest {
         assumeTrue(tool("ogrinfo"), "ogrinfo (gdal-bin) not installed: skipped");
         Map<String, String> expected = new LinkedHashMap<>();
         expected.put("gas_off", "Multi Polygon,1");
-        expected.put("affected_services", "Point,514");
+        expected.put("affected_services", "Point," + isolation.get("services_off").asText());
         expected.put("station_sheds", "Multi Polygon,3");
         expected.put("isolation_circle", "Multi Polygon,1");
         for (Map.Entry<String, String> e : expected.entrySet()) {
@@ -250,10 +265,11 @@ class ExportCommandTest {
                 .isEqualTo(2);
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--at", INCIDENT, "--out", dir.toString(), "--formats", "pdf,dwg")
                 .code()).isEqualTo(2);
-        CommandsTest.Run r = CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "9", "--out",
+        assertThat(CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "0", "--out",
+                dir.toString()).code()).isEqualTo(2);
+        CommandsTest.Run r3 = CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "99", "--out",
                 dir.toString());
-        assertThat(r.code()).isEqualTo(2);
-        assertThat(r.err()).contains("steps 1 to 4");
+        assertThat(r3.err()).contains("steps 1 to 14");
     }
 
     private static String text(PDDocument doc, int from, int to) throws IOException {
