@@ -151,6 +151,30 @@ class ExportCommandTest {
     }
 
     @Test
+    void pngAtTheChosenDpiAndSvgThatRenders() throws Exception {
+        BufferedImage png = ImageIO.read(step.resolve("map.png").toFile());
+        // A4 portrait 595.28 x 841.89 pt at 50 dpi: 413 x 585 px
+        assertThat(png.getWidth()).isEqualTo(413);
+        assertThat(png.getHeight()).isEqualTo(585);
+        String svg = Files.readString(step.resolve("map.svg"));
+        assertThat(svg).contains("<svg").contains("V-ELD-W").contains("CAUTION: Results depend")
+                .contains("data:image/png;base64,"); // the gas-off hatch tile
+        assumeTrue(tool("rsvg-convert"), "rsvg-convert (librsvg2-bin) not installed: skipped");
+        Path out = dir.resolve("svg.png");
+        exec(null, "rsvg-convert", "-o", out.toString(), step.resolve("map.svg").toString());
+        BufferedImage img = ImageIO.read(out.toFile());
+        assertThat(img.getWidth()).isEqualTo(596); // ceil(595.28) pt at 72 px per inch
+        int dark = 0;
+        for (int y = 0; y < img.getHeight(); y += 2) {
+            for (int x = 0; x < img.getWidth(); x += 2) {
+                Color c = new Color(img.getRGB(x, y), true);
+                if (c.getAlpha() > 200 && c.getRed() + c.getGreen() + c.getBlue() < 200) dark++;
+            }
+        }
+        assertThat(dark).as("dark pixels: frame, text, symbols").isGreaterThan(500);
+    }
+
+    @Test
     void valveListGridColumnAgreesWithGeoConvert() throws Exception {
         assumeTrue(tool("GeoConvert"), "GeoConvert (geographiclib-tools) not installed: skipped");
         JsonNode fc = new ObjectMapper().readTree(step.resolve("valves_to_operate.geojson").toFile());
