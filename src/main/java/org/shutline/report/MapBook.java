@@ -28,7 +28,7 @@ import org.shutline.model.LinearUnit;
 public final class MapBook {
     /** The most detailed scale a book sheet is drawn at. */
     public static final int MIN_SCALE = 1000;
-    /** Up to this scale the one with the fewest sheets is taken (a field map shows single services at 1:2,500). */
+    /** Up to this scale the one with the fewest sheets is taken (our choice: at 1:2,500 single services still show). */
     public static final int FIELD_SCALE = 2500;
 
     /** One sheet of the book: its number, grid column and row (0 = west, north), and the ground it shows. */

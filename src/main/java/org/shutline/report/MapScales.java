@@ -7,10 +7,10 @@ import org.locationtech.jts.geom.Envelope;
 import org.shutline.model.LinearUnit;
 
 /**
- * Round map scales and the choice of one for a map frame. The list holds the scales
- * common on US utility and engineering plans (1 in = 100 ft is 1:1,200, 1 in = 200 ft
- * is 1:2,400, 1:24,000 the USGS quadrangle) and the metric series 1:500, 1:1,000,
- * 1:2,000, 1:2,500, 1:5,000 ... (common practice). A scale 1:D means one point
+ * Round map scales and the choice of one for a map frame. The list holds the
+ * engineer's-scale series of US plans (1 in = 100 ft is 1:1,200, 1 in = 200 ft is
+ * 1:2,400, 1 in = 400 ft is 1:4,800, 1 in = 2,000 ft is 1:24,000) and the metric
+ * series 1:500, 1:1,000, 1:2,000, 1:2,500, 1:5,000 ... (common practice). A scale 1:D means one point
  * (1/72 in = 0.352 78 mm) on paper is D points on the ground.
  */
 public final class MapScales {

@@ -55,6 +55,11 @@ import org.shutline.render.UsngGrid;
  * {@code chart-steps.png/.svg} and {@code chart-phases.png/.svg}: only those of the
  * chosen formats. A target path that is the input network or plan file is refused
  * ({@link IOException}) before anything is written.
+ *
+ * <p>A builder is immutable once made and keeps no Swing state: build it and call
+ * {@link #write} on a worker thread (it checks the progress's cancellation between
+ * files and while writing the GeoPackage); the sheets it returns may be painted on
+ * any thread, one painting at a time per graphics target.
  */
 public final class ReportBuilder {
     /** Output formats. */
