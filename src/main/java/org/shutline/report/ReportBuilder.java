@@ -130,8 +130,11 @@ public final class ReportBuilder {
     private final StreetLocator streets;
     private final TitleInfo title;
     private final MapBook book;
+    private final Envelope areaOverride;
 
-    private ReportBuilder(ReportView view, Path networkFile, PlanEvaluation.Result plan, Path planFile, Options options) {
+    private ReportBuilder(ReportView view, Path networkFile, PlanEvaluation.Result plan, Path planFile, Options options,
+                          Envelope areaOverride) {
+        this.areaOverride = areaOverride == null || areaOverride.isNull() ? null : new Envelope(areaOverride);
         this.view = Objects.requireNonNull(view, "view");
         this.networkFile = networkFile;
         this.plan = plan;
@@ -142,7 +145,7 @@ public final class ReportBuilder {
         MapPainter p = new MapPainter(new MapScene(drawn(view.state())), MapSheet.printStyle());
         this.painter = geo == null ? p : p.withGrid(new UsngGrid(geo));
         this.streets = new StreetLocator(network.context(), network.crs().unit());
-        this.title = new TitleInfo(plan == null ? "Incident response: " + network.sourceName() : plan.states().plan().project(),
+        this.title = new TitleInfo(plan != null ? plan.states().plan().project() : projectWithoutPlan(view, network),
                 view.phase(), view.subject(), options.made(), options.preparedBy(),
                 networkFile == null ? network.sourceName() : String.valueOf(networkFile.getFileName()), modified(networkFile));
         MapSheet.Layout lay = MapSheet.layout(options.page().widthPt(), options.page().heightPt());
@@ -150,14 +153,30 @@ public final class ReportBuilder {
                 network.crs().unit(), options.maxBookSheets());
     }
 
+    private static String projectWithoutPlan(ReportView v, Network n) {
+        return switch (v.kind()) {
+            case INCIDENT -> "Incident response: " + n.sourceName();
+            case STEP -> "Work plan: " + n.sourceName();
+            case STATE -> "Network map: " + n.sourceName();
+        };
+    }
+
     /** A builder for a view of an incident or a step; {@code networkFile} (may be null) names the input in the title block. */
     public static ReportBuilder of(ReportView view, Path networkFile, Options options) {
-        return new ReportBuilder(view, networkFile, null, null, options);
+        return new ReportBuilder(view, networkFile, null, null, options, null);
     }
 
     /** The same with the evaluated plan the step belongs to (for the title, the charts and the input check). */
     public ReportBuilder withPlan(PlanEvaluation.Result r, Path file) {
-        return new ReportBuilder(view, networkFile, r, file, options);
+        return new ReportBuilder(view, networkFile, r, file, options, areaOverride);
+    }
+
+    /**
+     * The same with a given area of interest (network CRS), for example the extent shown
+     * in the window; null goes back to the area the view itself gives ({@link #area()}).
+     */
+    public ReportBuilder withArea(Envelope area) {
+        return new ReportBuilder(view, networkFile, plan, planFile, options, area);
     }
 
     /**
@@ -210,11 +229,13 @@ public final class ReportBuilder {
     }
 
     /**
-     * The area of interest: the gas-off extent, the valves to operate and the isolation
-     * circle; when there are none, the hazards with a position; else the whole network.
-     * Grown to at least {@link #MIN_AREA_M} metres across so the streets around show.
+     * The area of interest: the one given by {@link #withArea} if any; else the gas-off
+     * extent, the valves to operate and the isolation circle; when there are none, the
+     * hazards with a position; else the whole network. Grown to at least
+     * {@link #MIN_AREA_M} metres across so the streets around show (not a given area).
      */
     public Envelope area() {
+        if (areaOverride != null) return new Envelope(areaOverride);
         Envelope e = new Envelope(view.gasOff().getEnvelopeInternal());
         for (ReportView.OperatedValve v : view.valves()) e.expandToInclude(v.x(), v.y());
         if (view.ring() != null) {
@@ -287,7 +308,7 @@ public final class ReportBuilder {
     public List<Sheet> mapSheets() {
         List<Sheet> out = new ArrayList<>();
         Envelope all = area();
-        all.expandToInclude(book.extent());
+        if (book.size() > 1) all.expandToInclude(book.extent());
         MapSheet overview = MapSheet.of(painter, overlays(), all, title, geo).withPaperName(paperName())
                 .withNotes(notesHeading(), notes(null));
         if (book.size() > 1) {

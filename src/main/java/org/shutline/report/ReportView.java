@@ -39,8 +39,8 @@ import org.shutline.trace.NetworkState;
 public record ReportView(Kind kind, String subject, String phase, int step, NetworkState state, Geometry gasOff,
                          List<OperatedValve> valves, BitSet servicesOff, List<Hazard> hazards, IsolationRing ring,
                          FeedTrace.Result traceAfter) {
-    /** What the view is of. */
-    public enum Kind { STEP, INCIDENT }
+    /** What the view is of: a plan step, an incident, or a plain network state (a map of what is shown). */
+    public enum Kind { STEP, INCIDENT, STATE }
 
     /** Emergency Response Guidebook (2024), Guide 115 (natural gas): initial isolation at least 100 m in all directions. */
     public static final double ERG_115_ISOLATION_M = 100;
@@ -176,6 +176,15 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         return new ReportView(Kind.INCIDENT, subject, "", 0, state, gasOff, vs, r.servicesOff(), hz, ring, tr);
     }
 
+    /**
+     * A plain view of a state: no gas-off extent, valves, hazards or circle; for printing
+     * the network as it stands (for example the window's current map).
+     */
+    public static ReportView ofState(NetworkState state, String subject) {
+        return new ReportView(Kind.STATE, subject == null ? "Network map" : subject, "", 0, state, null, List.of(),
+                new BitSet(), List.of(), null, FeedTrace.run(state));
+    }
+
     static boolean overdue(LocalDate checked, Isolation.Options o) {
         if (checked == null) return o.neverCheckedIsOverdue();
         return checked.plus(o.inspectionInterval()).isBefore(o.asOf());
@@ -194,9 +203,13 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         return new double[] {s.nodeX(n), s.nodeY(n)};
     }
 
-    /** "step 2" or "incident", for file metadata and attributes. */
+    /** "step 2", "incident" or "network", for file metadata and attributes. */
     public String label() {
-        return kind == Kind.STEP ? "step " + step : "incident";
+        return switch (kind) {
+            case STEP -> "step " + step;
+            case INCIDENT -> "incident";
+            case STATE -> "network";
+        };
     }
 
     /** Number of meters off gas. */
