@@ -139,7 +139,8 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
      * and the stations to stop are out (buffered by {@code bufferM} metres, see
      * {@link GasOffExtent}); an isolation circle of {@code radiusM} metres around
      * ({@code x}, {@code y}) when {@code x} is not NaN; and, when valves alone cannot
-     * isolate, a critical hazard at each station to stop.
+     * isolate, a critical hazard at each station to stop, and the stations' inlet valves
+     * listed after the isolation's own valves (closing them stops the stations).
      */
     public static ReportView ofIncident(NetworkState state, Isolation.Result r, String subject, double x, double y,
                                         double radiusM, double bufferM) {
@@ -167,6 +168,14 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
                         "Stop station " + sid + (r.stationInletValves().isEmpty() ? "" : " (inlet valves "
                                 + String.join(", ", r.stationInletValves()) + ")") + " and watch its outlet pressure."));
             }
+        }
+        Map<String, Integer> index = valveIndex(state);
+        for (String id : r.stationInletValves()) {
+            Integer v = index.get(id);
+            if (v == null || vs.stream().anyMatch(o -> o.valveId().equals(id))) continue;
+            double[] xy = valvePoint(state, v);
+            vs.add(new OperatedValve(vs.size() + 1, id, xy[0], xy[1], true, state.valveKind(v), state.valveOperability(v),
+                    state.valveChecked(v), false, List.of()));
         }
         FeedTrace.Result before = FeedTrace.run(state);
         FeedTrace.Result tr = FeedTrace.run(after);
