@@ -40,11 +40,15 @@ import picocli.CommandLine.Spec;
  * {@link ReportBuilder} (see there for the files). The isolation circle of an incident
  * at a point defaults to 100 m, the initial isolation distance of the Emergency
  * Response Guidebook (2024), Guide 115 (natural gas). Exit 0 when written, 2 for bad
- * input, a bad option or an output path that is an input file.
+ * input, a bad option, an incident point more than {@link #FAR_M} m outside the mains'
+ * envelope, or an output path that is an input file.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
     description = "Write maps (PDF, PNG, SVG), map book, valve and customer lists and result layers of a plan step or an incident.")
 public final class ExportCommand implements Callable<Integer> {
+    /** An incident point farther than this many metres outside the envelope of the mains is refused as a likely typo. */
+    static final double FAR_M = 1000;
+
     static final class Where {
         @Option(names = "--plan", paramLabel = "PLAN", description = "a work plan (YAML); with --step")
         Path plan;
@@ -170,6 +174,16 @@ public final class ExportCommand implements Callable<Integer> {
     private ReportView incident(Topology t, Isolation.Options iso) {
         if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
             throw new IllegalArgumentException("export: no main with id '" + where.main + "' in " + network);
+        }
+        if (where.at != null) {
+            org.locationtech.jts.geom.Envelope ext = new org.locationtech.jts.geom.Envelope();
+            for (var m : t.network().mains()) if (m.geometry() != null) ext.expandToInclude(m.geometry().getEnvelopeInternal());
+            double reach = t.network().crs().unit().fromMetres(FAR_M);
+            if (ext.isNull() || ext.distance(new org.locationtech.jts.geom.Envelope(where.at[0], where.at[0], where.at[1], where.at[1])) > reach) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                        "export: the point %.1f, %.1f is more than %.0f m outside the network's mains (CRS %s); check the coordinates",
+                        where.at[0], where.at[1], FAR_M, t.network().crs().name()));
+            }
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         NetworkState base = NetworkState.of(t);

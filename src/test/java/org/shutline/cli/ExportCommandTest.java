@@ -292,6 +292,10 @@ class ExportCommandTest {
                 .isEqualTo(2);
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--at", INCIDENT, "--out", dir.toString(), "--formats", "pdf,dwg")
                 .code()).isEqualTo(2);
+        CommandsTest.Run far = CommandsTest.run("export", SAMPLE.toString(), "--at", "0,0", "--out", dir.resolve("far").toString());
+        assertThat(far.code()).isEqualTo(2);
+        assertThat(far.err()).contains("outside the network");
+        assertThat(dir.resolve("far")).doesNotExist();
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "0", "--out",
                 dir.toString()).code()).isEqualTo(2);
         CommandsTest.Run r3 = CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "99", "--out",
