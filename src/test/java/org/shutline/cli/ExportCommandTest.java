@@ -92,6 +92,15 @@ class ExportCommandTest {
             assertThat(incident.resolve(f)).exists();
         }
         assertThat(incident.resolve("map.png")).doesNotExist(); // not among the chosen formats
+        List<String> customers;
+        try {
+            customers = Files.readAllLines(incident.resolve("customers.csv"));
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        assertThat(customers.get(0)).isEqualTo("service,address,class,meters,critical,sheet");
+        assertThat(customers.get(1)).startsWith("SV-C-CARE,").contains(",critical,").contains("care home"); // critical first
+        assertThat(customers).hasSize(1 + isolation.get("services_off").asInt());
         for (String f : List.of("report.pdf", "map.png", "map.svg", "results.gpkg", "chart-steps.png", "chart-phases.svg")) {
             assertThat(step.resolve(f)).exists();
         }

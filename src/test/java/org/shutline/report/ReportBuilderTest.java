@@ -48,6 +48,31 @@ class ReportBuilderTest {
         }
     }
 
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0} landscape={1}")
+    @org.junit.jupiter.params.provider.CsvSource({"LETTER,true", "LETTER,false", "TABLOID,true", "TABLOID,false",
+        "A4,true", "A4,false", "A3,true", "A3,false"})
+    void everyPaperAndOrientation(Paper paper, boolean landscape) throws Exception {
+        NetworkState s = FieldListsTest.network();
+        PageFormat f = new PageFormat(paper, landscape);
+        ReportBuilder b = ReportBuilder.of(ReportView.ofState(s, "paper test"), null,
+                opts().withPage(f).withFormats(EnumSet.of(ReportBuilder.Format.PDF)));
+        MapSheet.Layout lay = MapSheet.layout(f.widthPt(), f.heightPt());
+        // the frame and the panel parts lie on the page and do not overlap the frame
+        java.awt.geom.Rectangle2D page = new java.awt.geom.Rectangle2D.Double(0, 0, f.widthPt(), f.heightPt());
+        for (java.awt.geom.Rectangle2D r : List.of(lay.frame(), lay.title(), lay.furniture(), lay.legend(), lay.notes())) {
+            assertThat(page.contains(r)).as("%s inside the page", r).isTrue();
+            if (r != lay.frame()) assertThat(r.intersects(lay.frame())).as("%s clear of the frame", r).isFalse();
+        }
+        b.write(dir, Progress.NONE);
+        try (PDDocument doc = Loader.loadPDF(dir.resolve("report.pdf").toFile())) {
+            // Paper sizes: ANSI Letter 612 x 792 pt, Tabloid 792 x 1224 pt; ISO 216 A4 595.28 x 841.89, A3 841.89 x 1190.55
+            assertThat(doc.getPage(0).getMediaBox().getWidth()).isCloseTo((float) f.widthPt(), org.assertj.core.data.Offset.offset(0.01f));
+            assertThat(doc.getPage(0).getMediaBox().getHeight()).isCloseTo((float) f.heightPt(), org.assertj.core.data.Offset.offset(0.01f));
+            String name = paper.name().charAt(0) + paper.name().substring(1).toLowerCase(java.util.Locale.ROOT);
+            assertThat(new PDFTextStripper().getText(doc).replaceAll("\\s+", " ")).contains("on " + name + " printed at 100 %");
+        }
+    }
+
     @Test
     void refusesATargetThatIsTheInput() throws IOException {
         NetworkState s = FieldListsTest.network();
