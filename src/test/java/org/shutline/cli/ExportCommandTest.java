@@ -229,9 +229,9 @@ class ExportCommandTest {
                 "station_sheds", "isolation_circle");
         assertThat(inc.get("gas_off")).containsExactly("Multi Polygon", "1", "32615");
         // the isolation's valves, then the inlet valves of the stations to stop (as shutline isolate lists them)
-        int valves = isolation.get("valves_to_close").size() + isolation.get("station_inlet_valves").size();
-        assertThat(valves).isPositive();
-        assertThat(inc.get("valves_to_operate")).containsExactly("Point", Integer.toString(valves), "32615");
+        int operated = isolation.get("valves_to_close").size() + isolation.get("station_inlet_valves").size();
+        assertThat(operated).isPositive();
+        assertThat(inc.get("valves_to_operate")).containsExactly("Point", Integer.toString(operated), "32615");
         assertThat(inc.get("affected_services")).containsExactly("Point", isolation.get("services_off").asText(), "32615");
         assertThat(inc.get("hazards")).containsExactly("Point", "1", "32615");
         // ST-S1 is stopped for the incident: the other three stations have sheds
