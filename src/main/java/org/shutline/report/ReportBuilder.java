@@ -47,7 +47,8 @@ import org.shutline.render.UsngGrid;
  * sheet N" at edges shared with another sheet and the valves and critical customers on
  * it), the valve operation list, the affected-customer list, the hazards with their
  * actions, and, for a plan, the charts of services and meters off per step and
- * customer-hours per phase. Every page carries the safety caution.
+ * customer-hours per phase. Every page carries the safety caution and "page k of n"
+ * of the whole document at its top right.
  *
  * <p>Files written in the output folder: {@code report.pdf}, {@code map.png},
  * {@code map.svg}, {@code results.gpkg}, one {@code <layer>.geojson} per result layer
@@ -359,6 +360,23 @@ public final class ReportBuilder {
         if (plan != null) {
             out.add(Charts.sheet(stepsChart(), "Services and meters off gas per step"));
             out.add(Charts.sheet(phasesChart(), "Customer-hours off gas per phase"));
+        }
+        return numbered(out);
+    }
+
+    /** The sheets with "page k of n" (the whole document) at the top right of each. */
+    static List<Sheet> numbered(List<Sheet> sheets) {
+        List<Sheet> out = new ArrayList<>(sheets.size());
+        int n = sheets.size();
+        for (int i = 0; i < n; i++) {
+            Sheet s = sheets.get(i);
+            String label = "page " + (i + 1) + " of " + n;
+            out.add((g, w, h) -> {
+                s.paint(g, w, h);
+                g.setColor(java.awt.Color.BLACK);
+                g.setFont(MapSheet.font(java.awt.Font.PLAIN, 7));
+                g.drawString(label, (float) (w - MapSheet.MARGIN - g.getFontMetrics().stringWidth(label)), 16f);
+            });
         }
         return out;
     }

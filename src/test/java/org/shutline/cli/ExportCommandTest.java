@@ -128,8 +128,10 @@ class ExportCommandTest {
                             + isolation.get("meters_off").asLong() + " meters)") // the same as shutline isolate says
                     .contains("station-feeds-zone");
             // every page carries the caution
-            for (int p = 1; p <= doc.getNumberOfPages(); p++) {
-                assertThat(oneLine(text(doc, p, p))).as("page %d", p).contains("CAUTION: Results depend on the completeness");
+            int n = doc.getNumberOfPages();
+            for (int p = 1; p <= n; p++) {
+                assertThat(oneLine(text(doc, p, p))).as("page %d", p).contains("CAUTION: Results depend on the completeness")
+                        .contains("page " + p + " of " + n);
             }
         }
     }
