@@ -40,8 +40,8 @@ class ExportCommandTest {
     static final Path PLAN = Path.of("sample-gis/tallowmere-plan.yaml");
     /** The order the plan command suggests for step 1 ("suggested order" in {@code shutline plan}). */
     static final List<String> STEP1 = List.of("V-ELD-W", "V-TAN-N", "V-TAN-S", "V-CI-W");
-    /** On Elder Street (row 4 of the sample grid), inside LP-SOUTH, 47 m east of Kiln Street. */
-    static final String INCIDENT = "512250,4890203";
+    /** On Fennel Way (row 5 of the sample grid), in the north-west valve zone of LP-SOUTH, which an inoperable valve joins to the zone Weir Lane Station feeds: valves alone cannot isolate it. */
+    static final String INCIDENT = "512150,4890503";
 
     @TempDir static Path dir;
     static Path incident;
@@ -114,7 +114,7 @@ class ExportCommandTest {
             assertThat(doc.getPage(0).getMediaBox().getWidth()).isEqualTo(792f);
             assertThat(doc.getPage(0).getMediaBox().getHeight()).isEqualTo(612f);
             String page1 = oneLine(text(doc, 1, 1));
-            assertThat(page1).contains("Incident response: tallowmere.gpkg").contains("Incident at 512250.0, 4890203.0")
+            assertThat(page1).contains("Incident response: tallowmere.gpkg").contains("Incident at 512150.0, 4890503.0")
                     .contains("by R. Tester").contains("Network: tallowmere.gpkg").contains("Scale 1:")
                     .contains("Grid: US National Grid 15T WJ")
                     .contains("Legend").contains("Off gas (gas-off extent)").contains("Isolation distance")
