@@ -115,7 +115,11 @@ final class ContextPainter implements LayerPainter {
         return false;
     }
 
-    /** The longest segment of the line on screen whose midpoint is on screen, as {x0, y0, x1, y1}; null if none. */
+    /**
+     * The longest piece of a segment of the line inside the screen, as {x0, y0, x1, y1};
+     * null if none. Segments are clipped to the screen first (Liang and Barsky, 1984), so
+     * a street drawn as one long segment reaching beyond the screen is still labelled.
+     */
     private static double[] longestSegment(Geometry geom, Viewport v, Rectangle2D screen) {
         double[] best = null;
         double bestLen = 0;
@@ -123,17 +127,37 @@ final class ContextPainter implements LayerPainter {
             if (!(geom.getGeometryN(p) instanceof LineString ls)) continue;
             CoordinateSequence cs = ls.getCoordinateSequence();
             for (int i = 1; i < cs.size(); i++) {
-                double x0 = v.screenX(cs.getX(i - 1));
-                double y0 = v.screenY(cs.getY(i - 1));
-                double x1 = v.screenX(cs.getX(i));
-                double y1 = v.screenY(cs.getY(i));
-                double len = Math.hypot(x1 - x0, y1 - y0);
-                if (len > bestLen && screen.contains((x0 + x1) / 2, (y0 + y1) / 2)) {
+                double[] c = clip(v.screenX(cs.getX(i - 1)), v.screenY(cs.getY(i - 1)),
+                        v.screenX(cs.getX(i)), v.screenY(cs.getY(i)), screen);
+                if (c == null) continue;
+                double len = Math.hypot(c[2] - c[0], c[3] - c[1]);
+                if (len > bestLen) {
                     bestLen = len;
-                    best = new double[] {x0, y0, x1, y1};
+                    best = c;
                 }
             }
         }
         return best;
+    }
+
+    /** The part of segment (x0, y0)-(x1, y1) inside {@code r}, or null (Liang-Barsky line clipping). */
+    static double[] clip(double x0, double y0, double x1, double y1, Rectangle2D r) {
+        double dx = x1 - x0;
+        double dy = y1 - y0;
+        double[] p = {-dx, dx, -dy, dy};
+        double[] q = {x0 - r.getMinX(), r.getMaxX() - x0, y0 - r.getMinY(), r.getMaxY() - y0};
+        double t0 = 0;
+        double t1 = 1;
+        for (int k = 0; k < 4; k++) {
+            if (p[k] == 0) {
+                if (q[k] < 0) return null;
+                continue;
+            }
+            double t = q[k] / p[k];
+            if (p[k] < 0) t0 = Math.max(t0, t);
+            else t1 = Math.min(t1, t);
+            if (t0 > t1) return null;
+        }
+        return new double[] {x0 + t0 * dx, y0 + t0 * dy, x0 + t1 * dx, y0 + t1 * dy};
     }
 }

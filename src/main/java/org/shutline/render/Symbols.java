@@ -205,18 +205,25 @@ public final class Symbols {
         g.setStroke(st);
     }
 
-    /** Text with a halo of the style's halo colour so it reads over any line. */
+    /**
+     * Text with a halo of the style's halo colour so it reads over any line: the glyph
+     * outlines stroked 2 px wide in the halo colour, then the text once on top (so a PDF
+     * holds each label once as selectable text, not nine times).
+     */
     public static void haloText(Graphics2D g, MapStyle s, String text, float x, float y, Color colour) {
         Color pen = g.getColor();
-        g.setColor(s.halo());
-        for (int dx = -1; dx <= 1; dx++) {
-            for (int dy = -1; dy <= 1; dy++) {
-                if (dx != 0 || dy != 0) g.drawString(text, x + dx, y + dy);
-            }
+        Stroke st = g.getStroke();
+        if (!text.isEmpty()) {
+            Shape outline = new java.awt.font.TextLayout(text, g.getFont(), g.getFontRenderContext())
+                    .getOutline(java.awt.geom.AffineTransform.getTranslateInstance(x, y));
+            g.setColor(s.halo());
+            g.setStroke(new BasicStroke(2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+            g.draw(outline);
         }
         g.setColor(colour);
         g.drawString(text, x, y);
         g.setColor(pen);
+        g.setStroke(st);
     }
 
     static Shape diamond(double cx, double cy, double h) {

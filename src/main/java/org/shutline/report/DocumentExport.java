@@ -111,7 +111,9 @@ public final class DocumentExport {
         } catch (javax.xml.parsers.ParserConfigurationException e) {
             throw new IOException("no XML DOM available for SVG", e);
         }
-        SVGGraphics2D g = new SVGGraphics2D(doc);
+        org.apache.batik.svggen.SVGGeneratorContext ctx = org.apache.batik.svggen.SVGGeneratorContext.createDefault(doc);
+        ctx.setImageHandler(new PngImages());
+        SVGGraphics2D g = new SVGGraphics2D(ctx, false);
         ReportFonts.family();
         int w = (int) Math.ceil(format.widthPt());
         int h = (int) Math.ceil(format.heightPt());
@@ -125,4 +127,20 @@ public final class DocumentExport {
         g.dispose();
     }
 
+    /**
+     * Embeds images (such as the hatch tile of a gas-off area) in an SVG as base64 PNG
+     * written by ImageIO: Batik's own encoder needs the batik-codec module, which is not
+     * a dependency.
+     */
+    private static final class PngImages extends org.apache.batik.svggen.ImageHandlerBase64Encoder {
+        @Override
+        public void encodeImage(java.awt.image.RenderedImage buf, java.io.OutputStream os)
+                throws org.apache.batik.svggen.SVGGraphics2DIOException {
+            try (java.io.OutputStream b64 = new org.apache.batik.util.Base64EncoderStream(os)) {
+                if (!ImageIO.write(buf, "png", b64)) throw new IOException("no PNG writer available");
+            } catch (IOException e) {
+                throw new org.apache.batik.svggen.SVGGraphics2DIOException(e);
+            }
+        }
+    }
 }

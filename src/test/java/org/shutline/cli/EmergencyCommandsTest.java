@@ -21,7 +21,7 @@ import org.shutline.model.Caution;
 /**
  * The emergency commands on the sample town (sample-gis/README.md): a leak on the
  * intermediate-pressure main M-IP-007 between V-013 and V-004, which feeds ST-S1 and
- * so the whole of LP-SOUTH (514 services, 653 meters, the care home); an over-pressure
+ * so the whole of LP-SOUTH (513 services, 653 meters, the care home); an over-pressure
  * of LP-SOUTH; the tables; the phase cards of a small renewal plan.
  */
 class EmergencyCommandsTest {
@@ -41,7 +41,7 @@ class EmergencyCommandsTest {
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("1. V-013").contains("2. V-004")
                 .contains("V-004 (operability unknown): then close V-005")
-                .contains("Services off 514, meters off 653")
+                .contains("Services off 513, meters off 653")
                 .contains("SV-C-CARE")
                 .contains("District(s) left dead: LP-SOUTH")
                 .contains("100 m in all directions (ERG Guide 115)")
@@ -58,7 +58,7 @@ class EmergencyCommandsTest {
         assertThat(j.get("kind").asText()).isEqualTo("leak");
         assertThat(j.get("system").asText()).isEqualTo("IP-1");
         assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-013", "V-004");
-        assertThat(j.get("services_off").asInt()).isEqualTo(514);
+        assertThat(j.get("services_off").asInt()).isEqualTo(513);
         assertThat(j.get("meters_off").asInt()).isEqualTo(653);
         assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CARE");
         JsonNode resp = j.get("response");
@@ -78,14 +78,16 @@ class EmergencyCommandsTest {
 
     @Test
     void leakInAStationFedDistrictNamesTheStationsToStop() throws Exception {
-        // next to Larch Road Clinic: LP-NORTH, one valve segment fed straight by ST-N1 and ST-N2
+        // next to Larch Road Clinic, in LP-NORTH: the west valve line has an inoperable valve (V-032), so the region
+        // grows over the west zone, which ST-N1 feeds straight: stop ST-N1 and close the east line
         CommandsTest.Run r = run("incident", NET, "--at", "512613,4890915", "--as-of", "2026-12-01", "--format", "json");
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("isolable").asBoolean()).isFalse();
-        assertThat(texts(j.get("stations_to_stop"))).containsExactly("ST-N1", "ST-N2");
-        assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011", "V-012");
+        assertThat(texts(j.get("stations_to_stop"))).containsExactly("ST-N1");
+        assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011");
+        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-031", "V-033", "V-037");
         assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CLINIC", "SV-C-SCHOOL1");
-        assertThat(j.get("meters_off").asInt()).isEqualTo(915);
+        assertThat(j.get("meters_off").asInt()).isEqualTo(650);
     }
 
     @Test
@@ -98,7 +100,7 @@ class EmergencyCommandsTest {
         assertThat(j.get("system").asText()).isEqualTo("LP-SOUTH");
         CommandsTest.Run many = run("incident", NET, "--address", "Elder Street");
         assertThat(many.code()).isEqualTo(2);
-        assertThat(many.err()).contains("matches").contains("SV-0874  101 Elder Street");
+        assertThat(many.err()).contains("matches").contains("SV-0879  101 Elder Street");
         assertThat(many.out()).isEmpty();
         assertThat(run("incident", NET, "--address", "no such road").code()).isEqualTo(2);
     }
@@ -126,7 +128,7 @@ class EmergencyCommandsTest {
             assertThat(texts(f.get("inlet_valves"))).containsExactly("V-013");
             assertThat(texts(f.get("upstream").get("valves_to_close"))).doesNotContain("V-013").isNotEmpty();
         });
-        assertThat(j.get("services_at_risk").asInt()).isEqualTo(514);
+        assertThat(j.get("services_at_risk").asInt()).isEqualTo(513);
         assertThat(j.get("meters_at_risk").asInt()).isEqualTo(653);
         assertThat(j.get("services_to_check").get(0).asText()).isEqualTo("SV-C-CARE");
         assertThat(texts(j.get("response").get("dead_systems"))).containsExactly("LP-SOUTH");
@@ -143,10 +145,10 @@ class EmergencyCommandsTest {
         assertThat(r.out()).contains("ST-S1").contains("Valves to fix first").contains(Caution.TEXT);
         List<String> seg = Files.readAllLines(dir.resolve("segments.csv"));
         assertThat(seg.get(0)).isEqualTo(String.join(",", RiskCommand.SEGMENT_HEADER));
-        assertThat(seg).hasSize(19); // 18 segments with pipe in the sample town
-        assertThat(seg.get(1)).startsWith("1,").contains("LP-NORTH").contains(",703,915,2,0,no");
+        assertThat(seg).hasSize(28); // 27 segments with pipe in the sample town
+        assertThat(seg.get(1)).startsWith("1,").contains("IP-1,M-IP-007").contains(",513,653,1,2,yes");
         List<String> st = Files.readAllLines(dir.resolve("stations.csv"));
-        assertThat(st.get(1)).startsWith("1,ST-S1,Weir Lane Station,IP-1,LP-SOUTH,yes,514,653,1,V-013");
+        assertThat(st.get(1)).startsWith("1,ST-S1,Weir Lane Station,IP-1,LP-SOUTH,yes,513,653,1,V-013");
         List<String> valves = Files.readAllLines(dir.resolve("valves-to-fix.csv"));
         assertThat(valves.get(0)).isEqualTo(String.join(",", RiskCommand.VALVE_HEADER));
         assertThat(valves.size()).isGreaterThan(10);
@@ -161,7 +163,7 @@ class EmergencyCommandsTest {
                 .redirectErrorStream(true).start();
         String info = new String(p.getInputStream().readAllBytes());
         p.waitFor();
-        assertThat(info).contains("Feature Count: 18").contains("services_off: Integer").contains("Multi Line String");
+        assertThat(info).contains("Feature Count: 27").contains("services_off: Integer").contains("Multi Line String");
     }
 
     @Test
@@ -172,7 +174,9 @@ class EmergencyCommandsTest {
         assertThat(j.get("cards")).hasSize(3);
         JsonNode one = j.get("cards").get(0);
         assertThat(one.get("work_site").asText()).contains("tie-in on M-S-0210");
-        assertThat(texts(one.get("excavation").get("stations_to_stop"))).containsExactly("ST-S1");
+        // both tie-in pits: the junction valves of each end isolate them
+        assertThat(one.get("excavation").get("isolable").asBoolean()).isTrue();
+        assertThat(texts(one.get("excavation").get("valves_to_close"), "valve")).contains("V-TAN-S", "V-WEI-S", "V-CI-W", "V-CI-E");
         assertThat(one.get("overpressure").get(0).get("system").asText()).isEqualTo("LP-SOUTH");
         // phase 3 cuts the cast-iron main and abandons it: no live pipe left in the pits
         JsonNode three = j.get("cards").get(2);

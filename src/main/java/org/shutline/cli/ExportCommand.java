@@ -1,0 +1,204 @@
+package org.shutline.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.time.LocalDateTime;
+import java.time.Period;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.PlanEvaluation;
+import org.shutline.analysis.Zone;
+import org.shutline.io.InputException;
+import org.shutline.model.Caution;
+import org.shutline.model.Progress;
+import org.shutline.plan.PlanException;
+import org.shutline.report.PageFormat;
+import org.shutline.report.Paper;
+import org.shutline.report.ReportBuilder;
+import org.shutline.report.ReportView;
+import org.shutline.topology.Topology;
+import org.shutline.trace.NetworkState;
+import org.shutline.trace.ValveSegments;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code shutline export NETWORK (--plan PLAN --step N | --at X,Y | --main ID) --out DIR
+ * [--paper letter|tabloid|a4|a3] [--landscape|--portrait] [--dpi 150]
+ * [--formats pdf,png,svg,gpkg,geojson,csv] [--prepared-by NAME] [--radius-m 100]}:
+ * writes the maps, lists and result layers of a plan step or an incident through
+ * {@link ReportBuilder} (see there for the files). The isolation circle of an incident
+ * at a point defaults to 100 m, the initial isolation distance of the Emergency
+ * Response Guidebook (2024), Guide 115 (natural gas). Exit 0 when written, 2 for bad
+ * input, a bad option, an incident point more than {@link #FAR_M} m outside the mains'
+ * envelope, or an output path that is an input file.
+ */
+@Command(name = "export", mixinStandardHelpOptions = true,
+    description = "Write maps (PDF, PNG, SVG), map book, valve and customer lists and result layers of a plan step or an incident.")
+public final class ExportCommand implements Callable<Integer> {
+    /** An incident point farther than this many metres outside the envelope of the mains is refused as a likely typo. */
+    static final double FAR_M = 1000;
+
+    static final class Where {
+        @Option(names = "--plan", paramLabel = "PLAN", description = "a work plan (YAML); with --step")
+        Path plan;
+
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", description = "an incident at a point in the network CRS")
+        double[] at;
+
+        @Option(names = "--main", paramLabel = "ID", description = "an incident on a main")
+        String main;
+    }
+
+    static final class Orientation {
+        @Option(names = "--landscape", description = "landscape pages (default)")
+        boolean landscape;
+
+        @Option(names = "--portrait", description = "portrait pages")
+        boolean portrait;
+    }
+
+    @Spec private CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
+    private Path network;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    private Where where;
+
+    @Option(names = "--step", paramLabel = "N", description = "with --plan: the step to map")
+    private Integer step;
+
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "output folder")
+    private Path out;
+
+    @Option(names = "--paper", defaultValue = "letter", description = "letter, tabloid, a4 or a3 (default: ${DEFAULT-VALUE})")
+    private String paper;
+
+    @ArgGroup(exclusive = true)
+    private Orientation orientation;
+
+    @Option(names = "--dpi", defaultValue = "150", description = "PNG resolution (default: ${DEFAULT-VALUE})")
+    private int dpi;
+
+    @Option(names = "--formats", split = ",", paramLabel = "LIST", defaultValue = "pdf,png,svg,gpkg,geojson,csv",
+        description = "any of pdf,png,svg,gpkg,geojson,csv (default: all)")
+    private List<String> formats;
+
+    @Option(names = "--prepared-by", paramLabel = "NAME", description = "name for the title block")
+    private String preparedBy;
+
+    @Option(names = "--radius-m", defaultValue = "100",
+        description = "isolation circle radius in metres (default: ${DEFAULT-VALUE}, Emergency Response Guidebook 2024, Guide 115)")
+    private double radiusM;
+
+    @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
+    private String system;
+
+    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
+    private Path mapping;
+
+    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
+    private LocalDate asOf;
+
+    @Option(names = "--inspection-months", defaultValue = "15", description = "valve inspection interval in months (default: ${DEFAULT-VALUE}, 49 CFR 192.747)")
+    private int inspectionMonths;
+
+    @Override
+    public Integer call() {
+        PrintWriter o = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        String bad = checkOptions();
+        if (bad != null) return fail(err, bad);
+        ReportBuilder.Options opts = options();
+        Isolation.Options iso = new Isolation.Options(asOf == null ? LocalDate.now() : asOf,
+                Period.ofMonths(inspectionMonths), true);
+        ReportBuilder rb;
+        try {
+            if (where.plan != null) {
+                PlanEvaluation.Result r = PlanCommand.evaluate(network, mapping, where.plan, null, iso.asOf(), inspectionMonths,
+                        Progress.NONE);
+                if (step < 1 || step > r.steps().size()) {
+                    return fail(err, "export: the plan has steps 1 to " + r.steps().size() + ", not " + step);
+                }
+                rb = ReportBuilder.of(ReportView.ofStep(r, step, iso), network, opts).withPlan(r, where.plan);
+            } else {
+                Topology t = NetworkInput.load(network, mapping, Progress.NONE);
+                rb = ReportBuilder.of(incident(t, iso), network, opts);
+            }
+        } catch (InputException | PlanException | IllegalArgumentException e) {
+            return fail(err, e.getMessage());
+        }
+        try {
+            List<Path> files = rb.write(out, Progress.NONE);
+            for (Path f : files) o.println("wrote " + f);
+            o.println(Caution.TEXT);
+            o.flush();
+            return 0;
+        } catch (IOException e) {
+            return fail(err, "export: " + e.getMessage());
+        }
+    }
+
+    private String checkOptions() {
+        if (where.plan != null && step == null) return "export: --plan needs --step N";
+        if (where.plan == null && step != null) return "export: --step goes with --plan";
+        if (where.at != null && where.at.length != 2) return "export: --at takes X,Y";
+        if (Paper.parse(paper).isEmpty()) return "export: unknown paper '" + paper + "' (letter, tabloid, a4, a3)";
+        if (dpi < 10 || dpi > 1200) return "export: --dpi must be 10 to 1200";
+        if (!(radiusM > 0)) return "export: --radius-m must be positive";
+        for (String f : formats) {
+            if (ReportBuilder.Format.parse(f).isEmpty()) return "export: unknown format '" + f + "' (pdf, png, svg, gpkg, geojson, csv)";
+        }
+        return null;
+    }
+
+    private ReportBuilder.Options options() {
+        boolean landscape = orientation == null || !orientation.portrait;
+        Set<ReportBuilder.Format> fs = EnumSet.noneOf(ReportBuilder.Format.class);
+        for (String f : formats) fs.add(ReportBuilder.Format.parse(f).orElseThrow());
+        return ReportBuilder.Options.defaults().withPage(new PageFormat(Paper.parse(paper).orElseThrow(), landscape))
+                .withDpi(dpi).withFormats(fs).withPreparedBy(preparedBy).withMade(LocalDateTime.now().withSecond(0).withNano(0));
+    }
+
+    private ReportView incident(Topology t, Isolation.Options iso) {
+        if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
+            throw new IllegalArgumentException("export: no main with id '" + where.main + "' in " + network);
+        }
+        if (where.at != null) {
+            org.locationtech.jts.geom.Envelope ext = new org.locationtech.jts.geom.Envelope();
+            for (var m : t.network().mains()) if (m.geometry() != null) ext.expandToInclude(m.geometry().getEnvelopeInternal());
+            double reach = t.network().crs().unit().fromMetres(FAR_M);
+            if (ext.isNull() || ext.distance(new org.locationtech.jts.geom.Envelope(where.at[0], where.at[0], where.at[1], where.at[1])) > reach) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
+                        "export: the point %.1f, %.1f is more than %.0f m outside the network's mains (CRS %s); check the coordinates",
+                        where.at[0], where.at[1], FAR_M, t.network().crs().name()));
+            }
+        }
+        Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
+        NetworkState base = NetworkState.of(t);
+        Isolation.Result r = new Isolation(ValveSegments.build(base), iso).isolate(zone);
+        String subject = where.main != null ? "Incident on main " + where.main
+                : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],
+                    system == null ? "" : " (" + system + ")");
+        double x = where.at == null ? Double.NaN : where.at[0];
+        double y = where.at == null ? Double.NaN : where.at[1];
+        return ReportView.ofIncident(base, r, subject, x, y, radiusM, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M);
+    }
+
+    private static int fail(PrintWriter err, String message) {
+        err.println(message);
+        err.flush();
+        return 2;
+    }
+}

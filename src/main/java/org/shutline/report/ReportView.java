@@ -1,0 +1,237 @@
+package org.shutline.report;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.shutline.analysis.GasOffExtent;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.PlanEvaluation;
+import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Operability;
+import org.shutline.model.Severity;
+import org.shutline.model.Station;
+import org.shutline.model.ValveKind;
+import org.shutline.plan.Phase;
+import org.shutline.plan.StepAction;
+import org.shutline.plan.StepState;
+import org.shutline.render.IsolationRing;
+import org.shutline.render.ValveToOperate;
+import org.shutline.trace.FeedTrace;
+import org.shutline.trace.NetworkState;
+
+/**
+ * What one exported map and its lists show: a plan step or an incident. Holds the
+ * state drawn (for a step: the state after it; for an incident: the network as
+ * recorded), the gas-off extent, the valves to operate in order, the services off gas
+ * (indices of the network's services), the hazards, the isolation circle (incidents at
+ * a point only) and the feed trace of the state after (for station sheds).
+ *
+ * <p>Built by {@link #ofStep} or {@link #ofIncident}; see those for exactly where each
+ * part comes from.
+ */
+public record ReportView(Kind kind, String subject, String phase, int step, NetworkState state, Geometry gasOff,
+                         List<OperatedValve> valves, BitSet servicesOff, List<Hazard> hazards, IsolationRing ring,
+                         FeedTrace.Result traceAfter) {
+    /** What the view is of: a plan step, an incident, or a plain network state (a map of what is shown). */
+    public enum Kind { STEP, INCIDENT, STATE }
+
+    /** Emergency Response Guidebook (2024), Guide 115 (natural gas): initial isolation at least 100 m in all directions. */
+    public static final double ERG_115_ISOLATION_M = 100;
+
+    /**
+     * A valve to operate with what the valve list needs: position (network CRS), kind,
+     * operability, last inspection (null when never recorded), whether it is past its
+     * inspection interval, and the fallback valves to close if it fails.
+     */
+    public record OperatedValve(int order, String valveId, double x, double y, boolean close, ValveKind valveKind,
+                                Operability operable, LocalDate checked, boolean overdue, List<String> fallbacks)
+            implements ValveToOperate {
+        public OperatedValve {
+            fallbacks = List.copyOf(fallbacks);
+        }
+    }
+
+    public ReportView {
+        Objects.requireNonNull(kind, "kind");
+        Objects.requireNonNull(state, "state");
+        gasOff = gasOff == null ? new GeometryFactory().createPolygon() : gasOff;
+        valves = List.copyOf(valves);
+        servicesOff = (BitSet) servicesOff.clone();
+        hazards = List.copyOf(hazards);
+        phase = phase == null ? "" : phase;
+    }
+
+    @Override
+    public BitSet servicesOff() {
+        return (BitSet) servicesOff.clone();
+    }
+
+    /**
+     * The view of step {@code number} of an evaluated plan: the state after the step, its
+     * gas-off extent, services off and hazards (new and continuing) from the evaluation;
+     * the valves of a {@code close} step in the listed order when ordered, else in the
+     * suggested order, with the suggestion's fallbacks; the valves of an {@code open}
+     * step in the listed order; no valves for other kinds of step.
+     *
+     * A valve is past its inspection interval by {@code options} (a valve never checked
+     * counts as past it when the options say so).
+     *
+     * @throws IllegalArgumentException when the plan has no such step
+     */
+    public static ReportView ofStep(PlanEvaluation.Result r, int number, Isolation.Options options) {
+        List<StepState> states = r.states().steps();
+        for (int i = 0; i < states.size(); i++) {
+            StepState st = states.get(i);
+            if (st.step().number() != number) continue;
+            PlanEvaluation.StepResult sr = r.steps().get(i);
+            Phase ph = r.states().plan().phases().get(st.step().phase());
+            List<OperatedValve> vs = stepValves(st, sr, options);
+            List<Hazard> hz = new ArrayList<>(sr.hazards());
+            hz.addAll(sr.continuing());
+            String subject = "Step " + number + ": " + st.step().describe()
+                    + (st.step().note() == null || st.step().note().isBlank() ? "" : " (" + st.step().note() + ")");
+            return new ReportView(Kind.STEP, subject, ph.name(), number, st.after(), sr.gasOff(), vs,
+                    sr.servicesOffSet(), hz, null, FeedTrace.run(st.after()));
+        }
+        throw new IllegalArgumentException("the plan has no step " + number + " (it has " + states.size() + ")");
+    }
+
+    private static List<OperatedValve> stepValves(StepState st, PlanEvaluation.StepResult sr, Isolation.Options opt) {
+        List<String> ids;
+        boolean close;
+        Map<String, List<String>> fallbacks = new HashMap<>();
+        if (st.step().action() instanceof StepAction.CloseValves c) {
+            ids = c.ordered() || sr.suggestion() == null ? c.valves() : sr.suggestion().order();
+            close = true;
+            if (sr.suggestion() != null) {
+                for (Isolation.Fallback f : sr.suggestion().fallbacks()) fallbacks.put(f.valveId(), f.thenClose());
+            }
+        } else if (st.step().action() instanceof StepAction.OpenValves o) {
+            ids = o.valves();
+            close = false;
+        } else {
+            return List.of();
+        }
+        NetworkState s = st.before();
+        Map<String, Integer> index = valveIndex(s);
+        List<OperatedValve> out = new ArrayList<>();
+        for (String id : ids) {
+            Integer v = index.get(id);
+            if (v == null) continue;
+            double[] xy = valvePoint(s, v);
+            out.add(new OperatedValve(out.size() + 1, id, xy[0], xy[1], close, s.valveKind(v), s.valveOperability(v),
+                    s.valveChecked(v), overdue(s.valveChecked(v), opt), fallbacks.getOrDefault(id, List.of())));
+        }
+        return out;
+    }
+
+    /**
+     * The view of an incident isolated in {@code state}: the valves of the isolation in
+     * operating order with their fallbacks; the services off from the isolation; the
+     * gas-off extent of the pipe live before and dead once the listed valves are closed
+     * and the stations to stop are out (buffered by {@code bufferM} metres, see
+     * {@link GasOffExtent}); an isolation circle of {@code radiusM} metres around
+     * ({@code x}, {@code y}) when {@code x} is not NaN; and, when valves alone cannot
+     * isolate, a critical hazard at each station to stop, and the stations' inlet valves
+     * listed after the isolation's own valves (closing them stops the stations).
+     */
+    public static ReportView ofIncident(NetworkState state, Isolation.Result r, String subject, double x, double y,
+                                        double radiusM, double bufferM) {
+        List<OperatedValve> vs = new ArrayList<>();
+        Map<String, List<String>> fallbacks = new HashMap<>();
+        for (Isolation.Fallback f : r.fallbacks()) fallbacks.put(f.valveId(), f.thenClose());
+        NetworkState after = state;
+        for (Isolation.ValveStep v : r.valves()) {
+            double[] xy = valvePoint(state, v.valve());
+            vs.add(new OperatedValve(v.order(), v.valveId(), xy[0], xy[1], true, state.valveKind(v.valve()), v.operable(),
+                    state.valveChecked(v.valve()), v.overdue(), fallbacks.getOrDefault(v.valveId(), List.of())));
+            after = after.withValveClosed(v.valve(), true);
+        }
+        List<Hazard> hz = new ArrayList<>();
+        List<Station> stations = state.network().stations();
+        for (String sid : r.stationsToStop()) {
+            for (int i = 0; i < stations.size(); i++) {
+                if (!stations.get(i).id().equals(sid)) continue;
+                after = after.withStationInService(i, false);
+                Station st = stations.get(i);
+                double sx = st.geometry() == null ? Double.NaN : st.geometry().getX();
+                double sy = st.geometry() == null ? Double.NaN : st.geometry().getY();
+                hz.add(new Hazard("station-feeds-zone", Severity.CRITICAL, 0, List.of(sid), sx, sy,
+                        "Valves alone cannot isolate the incident: " + r.reason(),
+                        "Stop station " + sid + (r.stationInletValves().isEmpty() ? "" : " (inlet valves "
+                                + String.join(", ", r.stationInletValves()) + ")") + " and watch its outlet pressure."));
+            }
+        }
+        Map<String, Integer> index = valveIndex(state);
+        for (String id : r.stationInletValves()) {
+            Integer v = index.get(id);
+            if (v == null || vs.stream().anyMatch(o -> o.valveId().equals(id))) continue;
+            double[] xy = valvePoint(state, v);
+            vs.add(new OperatedValve(vs.size() + 1, id, xy[0], xy[1], true, state.valveKind(v), state.valveOperability(v),
+                    state.valveChecked(v), false, List.of()));
+        }
+        FeedTrace.Result before = FeedTrace.run(state);
+        FeedTrace.Result tr = FeedTrace.run(after);
+        double buffer = state.network().crs().unit().fromMetres(bufferM);
+        Geometry gasOff = GasOffExtent.of(after, before.liveEdges(), tr.liveEdges(), r.servicesOff(), buffer);
+        IsolationRing ring = Double.isNaN(x) ? null : IsolationRing.of(x, y, radiusM);
+        return new ReportView(Kind.INCIDENT, subject, "", 0, state, gasOff, vs, r.servicesOff(), hz, ring, tr);
+    }
+
+    /**
+     * A plain view of a state: no gas-off extent, valves, hazards or circle; for printing
+     * the network as it stands (for example the window's current map).
+     */
+    public static ReportView ofState(NetworkState state, String subject) {
+        return new ReportView(Kind.STATE, subject == null ? "Network map" : subject, "", 0, state, null, List.of(),
+                new BitSet(), List.of(), null, FeedTrace.run(state));
+    }
+
+    static boolean overdue(LocalDate checked, Isolation.Options o) {
+        if (checked == null) return o.neverCheckedIsOverdue();
+        return checked.plus(o.inspectionInterval()).isBefore(o.asOf());
+    }
+
+    static Map<String, Integer> valveIndex(NetworkState s) {
+        Map<String, Integer> m = new HashMap<>();
+        for (int v = 0; v < s.valveCount(); v++) m.putIfAbsent(s.valveId(v), v);
+        return m;
+    }
+
+    /** A valve's position: the start node of its valve edge (both ends lie at the valve). */
+    static double[] valvePoint(NetworkState s, int v) {
+        int e = s.valveEdge(v);
+        int n = s.edgeFrom(e);
+        return new double[] {s.nodeX(n), s.nodeY(n)};
+    }
+
+    /** "step 2", "incident" or "network", for file metadata and attributes. */
+    public String label() {
+        return switch (kind) {
+            case STEP -> "step " + step;
+            case INCIDENT -> "incident";
+            case STATE -> "network";
+        };
+    }
+
+    /** Number of meters off gas. */
+    public long metersOff() {
+        long m = 0;
+        var svc = state.network().services();
+        for (int i = servicesOff.nextSetBit(0); i >= 0; i = servicesOff.nextSetBit(i + 1)) m += svc.get(i).meters();
+        return m;
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "ReportView[%s, %d valves, %d services off]", subject, valves.size(),
+                servicesOff.cardinality());
+    }
+}
