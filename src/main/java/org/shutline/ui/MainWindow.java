@@ -97,6 +97,9 @@ public final class MainWindow extends JFrame {
     private List<Geometry> selection = List.of();
     private List<Geometry> panelHighlight = List.of();
     private boolean critical;
+    /** Asks Save / Discard / Cancel for unsaved plan changes; a JOptionPane answer code. Replaced by the window tests. */
+    private java.util.function.IntSupplier discardPrompt = () -> JOptionPane.showConfirmDialog(this,
+            "The work plan has unsaved changes. Save them?", "Shutline", JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE);
 
     public MainWindow() {
         super("Shutline");
@@ -351,10 +354,13 @@ public final class MainWindow extends JFrame {
 
     private boolean confirmDiscard() {
         if (!plan.isDirty()) return true;
-        int a = JOptionPane.showConfirmDialog(this, "The work plan has unsaved changes. Save them?", "Shutline",
-                JOptionPane.YES_NO_CANCEL_OPTION, JOptionPane.WARNING_MESSAGE);
+        int a = discardPrompt.getAsInt();
         if (a == JOptionPane.YES_OPTION) return savePlan();
         return a == JOptionPane.NO_OPTION;
+    }
+
+    void setDiscardPrompt(java.util.function.IntSupplier prompt) {
+        discardPrompt = prompt;
     }
 
     /** Asks about unsaved changes, saves the layout and closes. */

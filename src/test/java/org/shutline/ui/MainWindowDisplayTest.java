@@ -273,6 +273,49 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(7)
+    void closingWithUnsavedChangesAsksAndSavesOnYes() throws Exception {
+        Path copy = planCopy;
+        var before = org.shutline.plan.PlanReader.read(copy);
+        List<String> expected = before.steps().stream().skip(1).map(st -> st.describe()).toList();
+        onEdt(() -> {
+            win.planPanel().open(before, copy);
+            return null;
+        });
+        waitFor("plan evaluated", () -> win.planPanel().result() != null && win.planPanel().result().steps().size() == before.steps().size());
+        onEdt(() -> {
+            win.planPanel().selectStep(0);
+            win.planPanel().removeStep();
+            return null;
+        });
+        assertThat(onEdt(() -> win.planPanel().isDirty())).isTrue();
+        int[] asked = new int[1];
+        onEdt(() -> {
+            win.setDiscardPrompt(() -> {
+                asked[0]++;
+                return javax.swing.JOptionPane.CANCEL_OPTION;
+            });
+            win.closeWindow();
+            return null;
+        });
+        assertThat(asked[0]).isEqualTo(1);
+        assertThat(onEdt(() -> win.isDisplayable())).as("Cancel keeps the window open").isTrue();
+        onEdt(() -> {
+            win.setDiscardPrompt(() -> {
+                asked[0]++;
+                return javax.swing.JOptionPane.YES_OPTION;
+            });
+            win.closeWindow();
+            return null;
+        });
+        assertThat(asked[0]).isEqualTo(2);
+        assertThat(onEdt(() -> win.isDisplayable())).as("Yes saves and closes").isFalse();
+        assertThat(org.shutline.plan.PlanReader.read(copy).steps()).extracting(st -> st.describe()).isEqualTo(expected);
+        assertThat(expected).isNotEmpty();
+        win = null;
+    }
+
+    @Test
     @Order(4)
     void theBundledSamplePlanShowsItsCriticalHazardStep() throws Exception {
         Path samplePlan = Path.of("sample-gis/tallowmere-plan.yaml");
