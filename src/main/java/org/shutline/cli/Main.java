@@ -27,8 +27,18 @@ public final class Main implements Runnable {
         if (System.getProperty("slf4j.internal.verbosity") == null) {
             System.setProperty("slf4j.internal.verbosity", "ERROR");
         }
-        // no arguments: the window on the bundled sample when there is a display, else the usage
-        if (args.length == 0 && !java.awt.GraphicsEnvironment.isHeadless()) args = OpenCommand.sampleArgs();
+        // no arguments: the window on the bundled sample when there is a display; without one,
+        // the main job on the sample at the command line (the sample plan's evaluation)
+        if (args.length == 0) {
+            String[] open = OpenCommand.sampleArgs();
+            if (!java.awt.GraphicsEnvironment.isHeadless()) {
+                args = open;
+            } else if (open.length == 3) {
+                System.err.println("shutline: no display for the window; evaluating the sample plan instead"
+                        + " (see ./shutline --help for all commands)");
+                args = new String[] {"plan", open[1], open[2]};
+            }
+        }
         System.exit(commandLine().execute(args));
     }
 
