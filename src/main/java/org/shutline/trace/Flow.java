@@ -4,6 +4,7 @@ import java.util.BitSet;
 import org.shutline.model.MainStatus;
 import org.shutline.model.Progress;
 import org.shutline.topology.EdgeKind;
+import org.shutline.topology.Graph;
 
 /**
  * Breadth-first gas flow over one {@link NetworkState}: through pipe edges of active
@@ -56,6 +57,7 @@ final class Flow {
      * station {@code blockedStation} (-1 for none).
      */
     BitSet reach(int[] starts, int blockedStation) {
+        if (s.isBase()) return reachBase(starts, blockedStation);
         BitSet seen = new BitSet(s.nodeCount());
         int head = 0, tail = 0;
         for (int v : starts) {
@@ -85,9 +87,61 @@ final class Flow {
         return seen;
     }
 
+    /**
+     * {@link #reach} on a state with no overlay: reads the frozen graph's CSR arrays
+     * directly (no overlay look-ups, no adjacency copy), same rules and same result.
+     */
+    private BitSet reachBase(int[] starts, int blockedStation) {
+        Graph g = s.graph();
+        BitSet seen = new BitSet(g.nodeCount());
+        int head = 0, tail = 0;
+        for (int v : starts) {
+            if (v >= 0 && !seen.get(v)) {
+                seen.set(v);
+                queue[tail++] = v;
+            }
+        }
+        int steps = 0;
+        while (head < tail) {
+            int v = queue[head++];
+            if ((++steps & 0xFFF) == 0) progress.checkCancelled();
+            for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
+                int e = g.adjEdge(i);
+                int f = g.edgeFeature(e);
+                byte k = g.edgeKind(e);
+                int w;
+                if (k == EdgeKind.PIPE) {
+                    if (!mainActive[f]) continue;
+                    w = g.opposite(e, v);
+                } else if (k == EdgeKind.VALVE) {
+                    if (closed.get(f)) continue;
+                    w = g.opposite(e, v);
+                } else if (k == EdgeKind.STATION) {
+                    w = g.edgeTo(e);
+                    if (!stationOn[f] || g.edgeFrom(e) != v || w == v || f == blockedStation) continue;
+                } else {
+                    continue;
+                }
+                if (!seen.get(w)) {
+                    seen.set(w);
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return seen;
+    }
+
     /** Services fed when {@code live} is the set of live nodes: on a live pipe edge with live ends. */
     BitSet fedServices(BitSet live) {
         BitSet fed = new BitSet(s.serviceCount());
+        if (s.isBase()) {
+            Graph g = s.graph();
+            for (int i = 0, n = g.serviceCount(); i < n; i++) {
+                int e = g.serviceEdge(i);
+                if (e >= 0 && g.edgeKind(e) == EdgeKind.PIPE && mainActive[g.edgeFeature(e)] && live.get(g.edgeFrom(e))) fed.set(i);
+            }
+            return fed;
+        }
         for (int i = 0; i < s.serviceCount(); i++) {
             int e = s.serviceEdge(i);
             if (e < 0 || s.isRemoved(e) || s.edgeKind(e) != EdgeKind.PIPE) continue;
