@@ -53,7 +53,11 @@ import org.shutline.trace.ValveSegments;
  * </ol>
  * Cost: each isolation is O(segments + links) on the segment graph, plus the zone
  * lookup (see {@link ZoneSegments}); fallbacks and the alternative repeat it once per
- * listed valve.
+ * listed valve. Services enter only at the end: services off, and those a fallback or
+ * the alternative adds, are read from the per-segment service lists of the segments
+ * off (every service lies in one segment), meters from the per-segment sums, so the
+ * service work is proportional to the services reported. A station's inlet valves
+ * (a scan of all valves) are found once per station and reused.
  */
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
@@ -134,6 +138,10 @@ public final class Isolation {
     private final Options options;
     private final BitSet before;
     private final int[] hops;
+    /** Services with a critical customer, once per instance. */
+    private final BitSet critical;
+    /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
+    private final java.util.concurrent.atomic.AtomicReferenceArray<List<String>> inletValvesCache;
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
@@ -144,6 +152,10 @@ public final class Isolation {
         this.options = options;
         this.before = sg.reachFromSources(null, null);
         this.hops = hopsFromSources();
+        List<Service> all = state.network().services();
+        this.critical = new BitSet(all.size());
+        for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
+        this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
     /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
@@ -173,8 +185,9 @@ public final class Isolation {
             if (noWorse && grown.listed.size() < core.listed.size()
                     && (alt == null || grown.listed.size() < alt.valves().size()
                         || (grown.listed.size() == alt.valves().size()
-                            && added(core, grown).size() < alt.addedServices().size()))) {
-                alt = new Alternative(ordered(grown), ids(added(core, grown)), meters(added(core, grown)));
+                            && addedCount(core, grown) < alt.addedServices().size()))) {
+                BitSet addedSegs = addedSegments(core, grown);
+                alt = new Alternative(ordered(grown), ids(servicesOf(addedSegs)), metersOf(addedSegs));
             }
         }
         return result(zoneSegs, core, fallbacks, alt);
@@ -191,13 +204,34 @@ public final class Isolation {
         BitSet region;
         BitSet after;
         BitSet off;
-        BitSet offServices;
+        /** Services of the off segments; built only when asked for ({@link #offServices()}). */
+        private BitSet offServices;
         final List<Integer> listed = new ArrayList<>();
         final List<Integer> far = new ArrayList<>();
         final List<String> closedBounds = new ArrayList<>();
         final List<String> unlisted = new ArrayList<>();
         final List<String> sources = new ArrayList<>();
         final List<Integer> stations = new ArrayList<>();
+
+        /** Services off: those of the off segments (each service lies in one segment). */
+        BitSet offServices() {
+            if (offServices == null) offServices = servicesOf(off);
+            return offServices;
+        }
+    }
+
+    private BitSet servicesOf(BitSet segments) {
+        BitSet out = new BitSet(state.serviceCount());
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
+            for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
+        }
+        return out;
+    }
+
+    private long metersOf(BitSet segments) {
+        long m = 0;
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += segs.meters(seg);
+        return m;
     }
 
     private Core core(BitSet seed) {
@@ -233,10 +267,6 @@ public final class Isolation {
         }
         c.off = (BitSet) before.clone();
         c.off.andNot(c.after);
-        c.offServices = new BitSet(state.serviceCount());
-        for (int seg = c.off.nextSetBit(0); seg >= 0; seg = c.off.nextSetBit(seg + 1)) {
-            for (int sv : segs.services(seg)) c.offServices.set(sv);
-        }
         return c;
     }
 
@@ -309,15 +339,27 @@ public final class Isolation {
         for (int l : core.listed) before.add(state.valveId(sg.linkFeature(l)));
         List<String> then = new ArrayList<>();
         for (String id : all) if (!before.contains(id)) then.add(id);
-        BitSet add = added(core, grown);
+        BitSet addedSegs = addedSegments(core, grown);
         boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
-        return new Fallback(state.valveId(v), why, isolable, all, then, ids(add), meters(add));
+        return new Fallback(state.valveId(v), why, isolable, all, then, ids(servicesOf(addedSegs)), metersOf(addedSegs));
     }
 
-    private static BitSet added(Core core, Core grown) {
-        BitSet add = (BitSet) grown.offServices.clone();
-        add.andNot(core.offServices);
+    /**
+     * Segments off in {@code grown} but not in {@code core}. Services off are the union of
+     * the services of the off segments and every service lies in one segment, so the
+     * services added are exactly those of these segments.
+     */
+    private static BitSet addedSegments(Core core, Core grown) {
+        BitSet add = (BitSet) grown.off.clone();
+        add.andNot(core.off);
         return add;
+    }
+
+    private int addedCount(Core core, Core grown) {
+        BitSet add = addedSegments(core, grown);
+        int n = 0;
+        for (int seg = add.nextSetBit(0); seg >= 0; seg = add.nextSetBit(seg + 1)) n += segs.serviceCount(seg);
+        return n;
     }
 
     private List<ValveStep> steps(Core c) {
@@ -346,12 +388,6 @@ public final class Isolation {
         return out;
     }
 
-    private long meters(BitSet services) {
-        long m = 0;
-        List<Service> all = state.network().services();
-        for (int i = services.nextSetBit(0); i >= 0; i = services.nextSetBit(i + 1)) m += all.get(i).meters();
-        return m;
-    }
 
     private Result result(BitSet zoneSegs, Core c, List<Fallback> fallbacks, Alternative alt) {
         List<String> stationIds = new ArrayList<>();
@@ -376,19 +412,26 @@ public final class Isolation {
         }
         BitSet unintended = (BitSet) c.off.clone();
         unintended.andNot(c.region);
-        List<String> critical = new ArrayList<>();
-        List<Service> all = state.network().services();
-        for (int i = c.offServices.nextSetBit(0); i >= 0; i = c.offServices.nextSetBit(i + 1)) {
-            if (all.get(i).isCritical()) critical.add(all.get(i).id());
-        }
+        BitSet offServices = c.offServices();
+        BitSet criticalOff = (BitSet) offServices.clone();
+        criticalOff.and(critical);
         boolean isolable = reason.length() == 0;
         return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), c.closedBounds,
-                c.unlisted, c.sources, stationIds, inletValves, c.offServices, ids(c.offServices),
-                meters(c.offServices), critical, fallbacks, Optional.ofNullable(alt));
+                c.unlisted, c.sources, stationIds, inletValves, offServices, ids(offServices),
+                metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
     }
 
     /** Valves of kind station on the station's inlet system within the point tolerance of it. */
     private List<String> inletValves(int st) {
+        List<String> cached = inletValvesCache.get(st);
+        if (cached == null) {
+            cached = List.copyOf(findInletValves(st));
+            inletValvesCache.compareAndSet(st, null, cached);
+        }
+        return cached;
+    }
+
+    private List<String> findInletValves(int st) {
         Network net = state.network();
         Station station = net.stations().get(st);
         double tol = state.topology().tolerances().pointM();
