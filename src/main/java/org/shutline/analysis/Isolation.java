@@ -114,7 +114,7 @@ public final class Isolation {
             stationsToStop = List.copyOf(stationsToStop);
             stationInletValves = List.copyOf(stationInletValves);
             servicesOff = (BitSet) servicesOff.clone();
-            serviceIdsOff = List.copyOf(serviceIdsOff);
+            serviceIdsOff = serviceIdsOff instanceof ServiceIdList ? serviceIdsOff : List.copyOf(serviceIdsOff);
             criticalOff = List.copyOf(criticalOff);
             fallbacks = List.copyOf(fallbacks);
         }
@@ -140,6 +140,8 @@ public final class Isolation {
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
     private final BitSet critical;
+    /** Services that lie in a segment (on active pipe). */
+    private final BitSet inSegment;
     /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
     private final java.util.concurrent.atomic.AtomicReferenceArray<List<String>> inletValvesCache;
     /** Built on the first point or polygon zone, then reused. */
@@ -155,6 +157,8 @@ public final class Isolation {
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
+        this.inSegment = new BitSet(all.size());
+        for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
         this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
@@ -221,6 +225,14 @@ public final class Isolation {
     }
 
     private BitSet servicesOf(BitSet segments) {
+        if (segments.cardinality() * 2 > sg.segmentCount()) {
+            // most segments: start from every service that has a segment and clear the others
+            BitSet out = (BitSet) inSegment.clone();
+            for (int seg = segments.nextClearBit(0); seg < sg.segmentCount(); seg = segments.nextClearBit(seg + 1)) {
+                for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.clear(segs.serviceAt(i));
+            }
+            return out;
+        }
         BitSet out = new BitSet(state.serviceCount());
         for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
             for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
@@ -417,7 +429,7 @@ public final class Isolation {
         criticalOff.and(critical);
         boolean isolable = reason.length() == 0;
         return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), c.closedBounds,
-                c.unlisted, c.sources, stationIds, inletValves, offServices, ids(offServices),
+                c.unlisted, c.sources, stationIds, inletValves, offServices, new ServiceIdList(state.network().services(), offServices),
                 metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
     }
 
