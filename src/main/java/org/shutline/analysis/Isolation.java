@@ -140,6 +140,13 @@ public final class Isolation {
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
     private final BitSet critical;
+    /**
+     * Per segment, the links whose two sides are different segments (CSR): a link with
+     * both sides in one segment can neither grow a region nor bound one, and in a
+     * meshed grid most valves are such links of the one large segment.
+     */
+    private final int[] crossStart;
+    private final int[] crossLink;
     /** Services that lie in a segment (on active pipe). */
     private final BitSet inSegment;
     /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
@@ -157,6 +164,20 @@ public final class Isolation {
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
+        int nseg = sg.segmentCount();
+        this.crossStart = new int[nseg + 1];
+        for (int u = 0; u < nseg; u++) {
+            int c = 0;
+            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) if (sg.linkA(sg.adjLink(i)) != sg.linkB(sg.adjLink(i))) c++;
+            crossStart[u + 1] = crossStart[u] + c;
+        }
+        this.crossLink = new int[crossStart[nseg]];
+        for (int u = 0, k = 0; u < nseg; u++) {
+            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
+                int l = sg.adjLink(i);
+                if (sg.linkA(l) != sg.linkB(l)) crossLink[k++] = l;
+            }
+        }
         this.inSegment = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
         this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
@@ -264,8 +285,8 @@ public final class Isolation {
         }
         c.after = sg.reachFromSources(c.region, stopLinks);
         for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
-            for (int i = sg.adjStart(seg); i < sg.adjEnd(seg); i++) {
-                int l = sg.adjLink(i);
+            for (int i = crossStart[seg]; i < crossStart[seg + 1]; i++) {
+                int l = crossLink[i];
                 if (!sg.isValve(l)) continue;
                 int o = sg.other(l, seg);
                 if (c.region.get(o)) continue;
@@ -290,8 +311,8 @@ public final class Isolation {
         for (int s = seed.nextSetBit(0); s >= 0; s = seed.nextSetBit(s + 1)) stack[top++] = s;
         while (top > 0) {
             int u = stack[--top];
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
+            for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
+                int l = crossLink[i];
                 if (!sg.isOpenInoperable(l)) continue;
                 int w = sg.other(l, u);
                 if (!region.get(w)) {
