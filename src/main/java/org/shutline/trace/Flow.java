@@ -88,10 +88,52 @@ final class Flow {
     }
 
     /**
-     * {@link #reach} on a state with no overlay: reads the frozen graph's CSR arrays
-     * directly (no overlay look-ups, no adjacency copy), same rules and same result.
+     * {@link #reach} on a state with no overlay: reads the base's packed flow adjacency
+     * ({@link NetworkState#baseFlowAdjacency()}, one sequential array per node) with a
+     * boolean array for the visited nodes; same rules and same result.
      */
     private BitSet reachBase(int[] starts, int blockedStation) {
+        Graph g = s.graph();
+        long[] adj = s.baseFlowAdjacency();
+        if (adj == null) return reachBaseEdges(starts, blockedStation);
+        int n = g.nodeCount();
+        boolean[] seen = new boolean[n];
+        int head = 0, tail = 0;
+        for (int v : starts) {
+            if (v >= 0 && !seen[v]) {
+                seen[v] = true;
+                queue[tail++] = v;
+            }
+        }
+        while (head < tail) {
+            int v = queue[head++];
+            if ((head & 0xFFF) == 0) progress.checkCancelled();
+            for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
+                long c = adj[i];
+                int w = (int) c;
+                if (seen[w]) continue;
+                int f = (int) (c >>> 34);
+                int code = (int) (c >>> 32) & 3;
+                boolean pass;
+                if (code == NetworkState.FLOW_PIPE) pass = mainActive[f];
+                else if (code == NetworkState.FLOW_VALVE) pass = !closed.get(f);
+                else pass = code == NetworkState.FLOW_STATION_OUT && stationOn[f] && f != blockedStation;
+                if (pass) {
+                    seen[w] = true;
+                    queue[tail++] = w;
+                }
+            }
+        }
+        BitSet out = new BitSet(n);
+        for (int i = 0; i < tail; i++) out.set(queue[i]);
+        return out;
+    }
+
+    /**
+     * {@link #reachBase} reading the frozen graph's edge arrays, for a graph whose
+     * features do not fit the packed adjacency.
+     */
+    private BitSet reachBaseEdges(int[] starts, int blockedStation) {
         Graph g = s.graph();
         BitSet seen = new BitSet(g.nodeCount());
         int head = 0, tail = 0;

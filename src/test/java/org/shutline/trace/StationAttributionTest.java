@@ -14,7 +14,9 @@ import org.shutline.topology.EdgeKind;
  * {@link FeedTrace#run} (segment-graph attribution) against the plain node-graph method
  * {@code FeedTrace.runByNodeSearch} on random networks, in the base state and with
  * random overlays: valves closed, stations out, mains abandoned, edges cut or removed,
- * a bypass pipe added. Every field of the result must be equal.
+ * a bypass pipe added. Every field of the result must be equal, and
+ * {@link FeedTrace#fedServices} must give the same fed set (on the base state it uses the
+ * packed adjacency of {@code NetworkState.baseFlowAdjacency}).
  */
 class StationAttributionTest {
 
@@ -69,5 +71,7 @@ class StationAttributionTest {
         assertThat(fast.unfedServices()).as(at + "unfed").isEqualTo(ref.unfedServices());
         assertThat(fast.deadMains()).as(at + "dead mains").isEqualTo(ref.deadMains());
         assertThat(fast.metersFed()).as(at + "meters fed").isEqualTo(ref.metersFed());
+        // the live-only trace (packed-adjacency search on the base state, overlay search otherwise)
+        assertThat(FeedTrace.fedServices(s)).as(at + "fedServices").isEqualTo(ref.fedServices());
     }
 }
