@@ -233,8 +233,11 @@ public final class Isolation {
         private BitSet offServices;
         final List<Integer> listed = new ArrayList<>();
         final List<Integer> far = new ArrayList<>();
-        final List<String> closedBounds = new ArrayList<>();
-        final List<String> unlisted = new ArrayList<>();
+        /** Links (not ids: only the plan's core is reported) of closed and of unlisted bounding valves. */
+        int[] closedBounds = new int[8];
+        int closedCount;
+        int[] unlisted = new int[64];
+        int unlistedCount;
         final List<String> sources = new ArrayList<>();
         final List<Integer> stations = new ArrayList<>();
 
@@ -290,12 +293,16 @@ public final class Isolation {
                 if (!sg.isValve(l)) continue;
                 int o = sg.other(l, seg);
                 if (c.region.get(o)) continue;
-                String id = state.valveId(sg.linkFeature(l));
-                if (!sg.isOpen(l)) c.closedBounds.add(id);
-                else if (c.after.get(o)) {
+                if (!sg.isOpen(l)) {
+                    if (c.closedCount == c.closedBounds.length) c.closedBounds = java.util.Arrays.copyOf(c.closedBounds, c.closedCount * 2);
+                    c.closedBounds[c.closedCount++] = l;
+                } else if (c.after.get(o)) {
                     c.listed.add(l);
                     c.far.add(o);
-                } else c.unlisted.add(id);
+                } else {
+                    if (c.unlistedCount == c.unlisted.length) c.unlisted = java.util.Arrays.copyOf(c.unlisted, c.unlistedCount * 2);
+                    c.unlisted[c.unlistedCount++] = l;
+                }
             }
         }
         c.off = (BitSet) before.clone();
@@ -414,6 +421,12 @@ public final class Isolation {
         return ids;
     }
 
+    private List<String> valveIds(int[] links, int n) {
+        List<String> out = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) out.add(state.valveId(sg.linkFeature(links[i])));
+        return out;
+    }
+
     private List<String> ids(BitSet services) {
         List<String> out = new ArrayList<>();
         List<Service> all = state.network().services();
@@ -449,8 +462,8 @@ public final class Isolation {
         BitSet criticalOff = (BitSet) offServices.clone();
         criticalOff.and(critical);
         boolean isolable = reason.length() == 0;
-        return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), c.closedBounds,
-                c.unlisted, c.sources, stationIds, inletValves, offServices, new ServiceIdList(state.network().services(), offServices),
+        return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), valveIds(c.closedBounds, c.closedCount),
+                valveIds(c.unlisted, c.unlistedCount), c.sources, stationIds, inletValves, offServices, new ServiceIdList(state.network().services(), offServices),
                 metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
     }
 
