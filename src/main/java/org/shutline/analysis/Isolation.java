@@ -140,13 +140,6 @@ public final class Isolation {
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
     private final BitSet critical;
-    /**
-     * Per segment, the links whose two sides are different segments (CSR): a link with
-     * both sides in one segment can neither grow a region nor bound one, and in a
-     * meshed grid most valves are such links of the one large segment.
-     */
-    private final int[] crossStart;
-    private final int[] crossLink;
     /** Services that lie in a segment (on active pipe). */
     private final BitSet inSegment;
     /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
@@ -164,20 +157,6 @@ public final class Isolation {
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
-        int nseg = sg.segmentCount();
-        this.crossStart = new int[nseg + 1];
-        for (int u = 0; u < nseg; u++) {
-            int c = 0;
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) if (sg.linkA(sg.adjLink(i)) != sg.linkB(sg.adjLink(i))) c++;
-            crossStart[u + 1] = crossStart[u] + c;
-        }
-        this.crossLink = new int[crossStart[nseg]];
-        for (int u = 0, k = 0; u < nseg; u++) {
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
-                if (sg.linkA(l) != sg.linkB(l)) crossLink[k++] = l;
-            }
-        }
         this.inSegment = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
         this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
@@ -202,7 +181,7 @@ public final class Isolation {
         for (int i = 0; i < core.listed.size(); i++) {
             int l = core.listed.get(i);
             int v = sg.linkFeature(l);
-            Core grown = core(with(core.region, core.far.get(i)));
+            Core grown = core(grownBy(core.region, core.far.get(i)));
             String why = whyFallback(v);
             if (why != null) fallbacks.add(fallback(v, why, core, grown));
             boolean noWorse = grown.sources.size() <= core.sources.size()
@@ -218,10 +197,15 @@ public final class Isolation {
         return result(zoneSegs, core, fallbacks, alt);
     }
 
-    private static BitSet with(BitSet b, int seg) {
-        BitSet c = (BitSet) b.clone();
-        c.set(seg);
-        return c;
+    /**
+     * The region grown across segment {@code seg}: {@code region} is already closed under
+     * growth across open inoperable valves, so growing the union only needs a search from
+     * {@code seg}, with the region counted as visited (same set as growing the union).
+     */
+    private BitSet grownBy(BitSet region, int seg) {
+        BitSet seed = new BitSet(sg.segmentCount());
+        seed.set(seg);
+        return growInto((BitSet) region.clone(), seed);
     }
 
     /** The isolation of a seed set of segments, without fallbacks. */
@@ -288,8 +272,8 @@ public final class Isolation {
         }
         c.after = sg.reachFromSources(c.region, stopLinks);
         for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
-            for (int i = crossStart[seg]; i < crossStart[seg + 1]; i++) {
-                int l = crossLink[i];
+            for (int i = sg.crossStart(seg); i < sg.crossEnd(seg); i++) {
+                int l = sg.crossLink(i);
                 if (!sg.isValve(l)) continue;
                 int o = sg.other(l, seg);
                 if (c.region.get(o)) continue;
@@ -312,14 +296,19 @@ public final class Isolation {
 
     /** The seed grown across open valves with operable = no; O(segments + links). */
     BitSet grow(BitSet seed) {
-        BitSet region = (BitSet) seed.clone();
+        return growInto(new BitSet(sg.segmentCount()), seed);
+    }
+
+    /** Adds the seed and everything reached from it across open inoperable valves to {@code region}. */
+    private BitSet growInto(BitSet region, BitSet seed) {
+        region.or(seed);
         int[] stack = new int[Math.max(1, sg.segmentCount())];
         int top = 0;
         for (int s = seed.nextSetBit(0); s >= 0; s = seed.nextSetBit(s + 1)) stack[top++] = s;
         while (top > 0) {
             int u = stack[--top];
-            for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
-                int l = crossLink[i];
+            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
+                int l = sg.crossLink(i);
                 if (!sg.isOpenInoperable(l)) continue;
                 int w = sg.other(l, u);
                 if (!region.get(w)) {
