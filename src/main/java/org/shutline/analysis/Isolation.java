@@ -241,7 +241,7 @@ public final class Isolation {
             }
             return out;
         }
-        BitSet out = new BitSet(state.serviceCount());
+        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
         for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
             for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
         }
@@ -448,11 +448,11 @@ public final class Isolation {
         BitSet unintended = (BitSet) c.off.clone();
         unintended.andNot(c.region);
         BitSet offServices = c.offServices();
-        BitSet criticalOff = (BitSet) offServices.clone();
-        criticalOff.and(critical);
+        BitSet criticalOff = new BitSet();
+        for (int i = critical.nextSetBit(0); i >= 0; i = critical.nextSetBit(i + 1)) if (offServices.get(i)) criticalOff.set(i);
         boolean isolable = reason.length() == 0;
         return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), valveIds(c.closedBounds, c.closedCount),
-                valveIds(c.unlisted, c.unlistedCount), c.sources, stationIds, inletValves, offServices, new ServiceIdList(state.network().services(), offServices),
+                valveIds(c.unlisted, c.unlistedCount), c.sources, stationIds, inletValves, offServices, ServiceIdList.owning(state.network().services(), offServices),
                 metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
     }
 

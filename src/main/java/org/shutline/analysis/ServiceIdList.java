@@ -24,9 +24,18 @@ final class ServiceIdList extends AbstractList<String> implements RandomAccess {
     private volatile int[] index;
 
     ServiceIdList(List<Service> services, BitSet set) {
+        this(services, (BitSet) set.clone(), 0);
+    }
+
+    private ServiceIdList(List<Service> services, BitSet owned, int unused) {
         this.services = services;
-        this.set = (BitSet) set.clone();
-        this.size = set.cardinality();
+        this.set = owned;
+        this.size = owned.cardinality();
+    }
+
+    /** A list that keeps {@code set} itself: the caller hands it over and never changes it again. */
+    static ServiceIdList owning(List<Service> services, BitSet set) {
+        return new ServiceIdList(services, set, 0);
     }
 
     @Override
