@@ -144,6 +144,7 @@ public final class Isolation {
     private final BitSet inSegment;
     /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
     private final java.util.concurrent.atomic.AtomicReferenceArray<List<String>> inletValvesCache;
+    private volatile int[] stationKindValves;
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
@@ -261,16 +262,16 @@ public final class Isolation {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
         }
-        BitSet stopLinks = new BitSet(sg.linkCount());
+        BitSet stopped = new BitSet(state.stationCount());
         for (int st = 0; st < state.stationCount(); st++) {
             int l = sg.stationLink(st);
             if (l < 0 || !sg.isOpen(l)) continue;
             if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
                 c.stations.add(st);
-                stopLinks.set(l);
+                stopped.set(st);
             }
         }
-        c.after = sg.reachFromSources(c.region, stopLinks);
+        c.after = sg.reachFromSourcesStopping(c.region, stopped);
         for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
             for (int i = sg.crossStart(seg); i < sg.crossEnd(seg); i++) {
                 int l = sg.crossLink(i);
@@ -466,14 +467,33 @@ public final class Isolation {
         return cached;
     }
 
+    /** Indices of the valves of kind station, in index order (one scan of the valves, on first use). */
+    private int[] stationKindValves() {
+        int[] a = stationKindValves;
+        if (a == null) {
+            List<Valve> vs = state.network().valves();
+            int c = 0;
+            a = new int[16];
+            for (int i = 0; i < vs.size(); i++) {
+                if (vs.get(i).kind() != ValveKind.STATION) continue;
+                if (c == a.length) a = java.util.Arrays.copyOf(a, c * 2);
+                a[c++] = i;
+            }
+            a = java.util.Arrays.copyOf(a, c);
+            stationKindValves = a;
+        }
+        return a;
+    }
+
     private List<String> findInletValves(int st) {
         Network net = state.network();
         Station station = net.stations().get(st);
         double tol = state.topology().tolerances().pointM();
         List<String> out = new ArrayList<>();
         Point at = station.geometry();
-        for (Valve v : net.valves()) {
-            if (v.kind() != ValveKind.STATION || !Objects.equals(v.systemId(), station.inSys())) continue;
+        for (int i : stationKindValves()) {
+            Valve v = net.valves().get(i);
+            if (!Objects.equals(v.systemId(), station.inSys())) continue;
             if (at != null && v.geometry() != null && v.geometry().distance(at) <= tol) out.add(v.id());
         }
         return out;
