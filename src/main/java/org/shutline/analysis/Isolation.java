@@ -133,6 +133,7 @@ public final class Isolation {
     }
 
     private final ValveSegments segs;
+    private final boolean plain;
     private final SegmentGraph sg;
     private final NetworkState state;
     private final Options options;
@@ -149,6 +150,15 @@ public final class Isolation {
     private EdgeIndex index;
 
     public Isolation(ValveSegments segments, Options options) {
+        this(segments, options, false);
+    }
+
+    /**
+     * With {@code plain}, every core is computed the plain way (region grown from the
+     * whole seed, the whole boundary scanned); the tests compare it with the default.
+     */
+    Isolation(ValveSegments segments, Options options, boolean plain) {
+        this.plain = plain;
         this.segs = segments;
         this.sg = segments.graph();
         this.state = segments.state();
@@ -176,13 +186,14 @@ public final class Isolation {
     public Result isolate(Zone zone) {
         if (index == null && !(zone instanceof Zone.OfSegments) && !(zone instanceof Zone.OfMains)) index = new EdgeIndex(segs);
         BitSet zoneSegs = ZoneSegments.of(zone, segs, index);
-        Core core = core(zoneSegs);
+        Core core = core(grow(zoneSegs), true);
         List<Fallback> fallbacks = new ArrayList<>();
         Alternative alt = null;
         for (int i = 0; i < core.listed.size(); i++) {
             int l = core.listed.get(i);
             int v = sg.linkFeature(l);
-            Core grown = core(grownBy(core.region, core.far.get(i)));
+            Core grown = plain ? core(grow(with(core.region, core.far.get(i))), true)
+                    : core(grownBy(core.region, core.far.get(i)), false);
             String why = whyFallback(v);
             if (why != null) fallbacks.add(fallback(v, why, core, grown));
             boolean noWorse = grown.sources.size() <= core.sources.size()
@@ -203,6 +214,12 @@ public final class Isolation {
      * growth across open inoperable valves, so growing the union only needs a search from
      * {@code seg}, with the region counted as visited (same set as growing the union).
      */
+    private static BitSet with(BitSet b, int seg) {
+        BitSet c = (BitSet) b.clone();
+        c.set(seg);
+        return c;
+    }
+
     private BitSet grownBy(BitSet region, int seg) {
         BitSet seed = new BitSet(sg.segmentCount());
         seed.set(seg);
@@ -255,9 +272,17 @@ public final class Isolation {
         return m;
     }
 
-    private Core core(BitSet seed) {
+    /**
+     * The isolation of a region already grown across open inoperable valves. With
+     * {@code report}, every bounding valve is classified (listed, already closed,
+     * unlisted); without, only the listed ones are found (all that fallbacks and the
+     * alternative need), from whichever side has fewer links to scan: the region's
+     * boundary or the segments still fed after. Both give the listed valves in the
+     * same order (region segment, then link index).
+     */
+    private Core core(BitSet region, boolean report) {
         Core c = new Core();
-        c.region = grow(seed);
+        c.region = region;
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
@@ -272,6 +297,50 @@ public final class Isolation {
             }
         }
         c.after = sg.reachFromSourcesStopping(c.region, stopped);
+        if (!report && crossLinks(c.after) < crossLinks(c.region)) {
+            listedFromFedSide(c);
+        } else {
+            scanBoundary(c);
+        }
+        c.off = (BitSet) before.clone();
+        c.off.andNot(c.after);
+        return c;
+    }
+
+    private int crossLinks(BitSet set) {
+        int n = 0;
+        for (int seg = set.nextSetBit(0); seg >= 0; seg = set.nextSetBit(seg + 1)) n += sg.crossEnd(seg) - sg.crossStart(seg);
+        return n;
+    }
+
+    /**
+     * Listed valves found from the fed side: open valve links from a segment fed after
+     * into the region (the fed side never lies in the region). Sorted by (region
+     * segment, link) as {@link #scanBoundary} finds them.
+     */
+    private void listedFromFedSide(Core c) {
+        long[] keys = new long[16];
+        int n = 0;
+        for (int a = c.after.nextSetBit(0); a >= 0; a = c.after.nextSetBit(a + 1)) {
+            for (int i = sg.crossStart(a); i < sg.crossEnd(a); i++) {
+                int l = sg.crossLink(i);
+                if (!sg.isValve(l) || !sg.isOpen(l)) continue;
+                int r = sg.other(l, a);
+                if (!c.region.get(r)) continue;
+                if (n == keys.length) keys = java.util.Arrays.copyOf(keys, n * 2);
+                keys[n++] = ((long) r << 32) | l;
+            }
+        }
+        java.util.Arrays.sort(keys, 0, n);
+        for (int k = 0; k < n; k++) {
+            int l = (int) keys[k];
+            c.listed.add(l);
+            c.far.add(sg.other(l, (int) (keys[k] >>> 32)));
+        }
+    }
+
+    /** Every open or closed valve on the region's boundary, by region segment then link index. */
+    private void scanBoundary(Core c) {
         for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
             for (int i = sg.crossStart(seg); i < sg.crossEnd(seg); i++) {
                 int l = sg.crossLink(i);
@@ -290,9 +359,6 @@ public final class Isolation {
                 }
             }
         }
-        c.off = (BitSet) before.clone();
-        c.off.andNot(c.after);
-        return c;
     }
 
     /** The seed grown across open valves with operable = no; O(segments + links). */
