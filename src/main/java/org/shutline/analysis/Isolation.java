@@ -108,8 +108,8 @@ public final class Isolation {
             region = (BitSet) region.clone();
             unintended = (BitSet) unintended.clone();
             valves = List.copyOf(valves);
-            closedBoundaryValves = List.copyOf(closedBoundaryValves);
-            unlistedValves = List.copyOf(unlistedValves);
+            closedBoundaryValves = closedBoundaryValves instanceof ValveIdList ? closedBoundaryValves : List.copyOf(closedBoundaryValves);
+            unlistedValves = unlistedValves instanceof ValveIdList ? unlistedValves : List.copyOf(unlistedValves);
             sourcesInRegion = List.copyOf(sourcesInRegion);
             stationsToStop = List.copyOf(stationsToStop);
             stationInletValves = List.copyOf(stationInletValves);
@@ -478,9 +478,7 @@ public final class Isolation {
     }
 
     private List<String> valveIds(int[] links, int n) {
-        List<String> out = new ArrayList<>(n);
-        for (int i = 0; i < n; i++) out.add(state.valveId(sg.linkFeature(links[i])));
-        return out;
+        return new ValveIdList(state, sg, links, n);
     }
 
     private List<String> ids(BitSet services) {
