@@ -57,7 +57,13 @@ import org.shutline.trace.ValveSegments;
  * the alternative adds, are read from the per-segment service lists of the segments
  * off (every service lies in one segment), meters from the per-segment sums, so the
  * service work is proportional to the services reported. A station's inlet valves
- * (a scan of all valves) are found once per station and reused.
+ * are found once per station and reused. Searches and boundary scans use only links
+ * between two different segments ({@link SegmentGraph#crossStart}); the cores of
+ * fallbacks and alternatives grow from the added segment only and find their listed
+ * valves from the smaller side (region boundary or segments still fed). The result's
+ * {@code serviceIdsOff}, {@code unlistedValves} and {@code closedBoundaryValves} are
+ * immutable lists that look ids up when read, so an outcome of two million services
+ * costs O(words of the set) until someone reads the ids.
  */
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
