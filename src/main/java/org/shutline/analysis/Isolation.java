@@ -91,7 +91,7 @@ public final class Isolation {
         public Fallback {
             valves = List.copyOf(valves);
             thenClose = List.copyOf(thenClose);
-            addedServices = List.copyOf(addedServices);
+            addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
         }
     }
 
@@ -99,7 +99,7 @@ public final class Isolation {
     public record Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
         public Alternative {
             valves = List.copyOf(valves);
-            addedServices = List.copyOf(addedServices);
+            addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
         }
     }
 
@@ -209,7 +209,7 @@ public final class Isolation {
                         || (grown.listed.size() == alt.valves().size()
                             && addedCount(core, grown) < alt.addedServices().size()))) {
                 BitSet addedSegs = addedSegments(core, grown);
-                alt = new Alternative(ordered(grown), ids(servicesOf(addedSegs)), metersOf(addedSegs));
+                alt = new Alternative(ordered(grown), ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
             }
         }
         return result(zoneSegs, core, fallbacks, alt);
@@ -443,7 +443,7 @@ public final class Isolation {
         for (String id : all) if (!before.contains(id)) then.add(id);
         BitSet addedSegs = addedSegments(core, grown);
         boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
-        return new Fallback(state.valveId(v), why, isolable, all, then, ids(servicesOf(addedSegs)), metersOf(addedSegs));
+        return new Fallback(state.valveId(v), why, isolable, all, then, ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
     }
 
     /**
