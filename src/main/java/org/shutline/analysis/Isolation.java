@@ -53,7 +53,17 @@ import org.shutline.trace.ValveSegments;
  * </ol>
  * Cost: each isolation is O(segments + links) on the segment graph, plus the zone
  * lookup (see {@link ZoneSegments}); fallbacks and the alternative repeat it once per
- * listed valve.
+ * listed valve. Services enter only at the end: services off, and those a fallback or
+ * the alternative adds, are read from the per-segment service lists of the segments
+ * off (every service lies in one segment), meters from the per-segment sums, so the
+ * service work is proportional to the services reported. A station's inlet valves
+ * are found once per station and reused. Searches and boundary scans use only links
+ * between two different segments ({@link SegmentGraph#crossStart}); the cores of
+ * fallbacks and alternatives grow from the added segment only and find their listed
+ * valves from the smaller side (region boundary or segments still fed). The result's
+ * {@code serviceIdsOff}, {@code unlistedValves} and {@code closedBoundaryValves} are
+ * immutable lists that look ids up when read, so an outcome of two million services
+ * costs O(words of the set) until someone reads the ids.
  */
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
@@ -81,7 +91,7 @@ public final class Isolation {
         public Fallback {
             valves = List.copyOf(valves);
             thenClose = List.copyOf(thenClose);
-            addedServices = List.copyOf(addedServices);
+            addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
         }
     }
 
@@ -89,7 +99,7 @@ public final class Isolation {
     public record Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
         public Alternative {
             valves = List.copyOf(valves);
-            addedServices = List.copyOf(addedServices);
+            addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
         }
     }
 
@@ -104,13 +114,13 @@ public final class Isolation {
             region = (BitSet) region.clone();
             unintended = (BitSet) unintended.clone();
             valves = List.copyOf(valves);
-            closedBoundaryValves = List.copyOf(closedBoundaryValves);
-            unlistedValves = List.copyOf(unlistedValves);
+            closedBoundaryValves = closedBoundaryValves instanceof ValveIdList ? closedBoundaryValves : List.copyOf(closedBoundaryValves);
+            unlistedValves = unlistedValves instanceof ValveIdList ? unlistedValves : List.copyOf(unlistedValves);
             sourcesInRegion = List.copyOf(sourcesInRegion);
             stationsToStop = List.copyOf(stationsToStop);
             stationInletValves = List.copyOf(stationInletValves);
             servicesOff = (BitSet) servicesOff.clone();
-            serviceIdsOff = List.copyOf(serviceIdsOff);
+            serviceIdsOff = serviceIdsOff instanceof ServiceIdList ? serviceIdsOff : List.copyOf(serviceIdsOff);
             criticalOff = List.copyOf(criticalOff);
             fallbacks = List.copyOf(fallbacks);
         }
@@ -129,21 +139,44 @@ public final class Isolation {
     }
 
     private final ValveSegments segs;
+    private final boolean plain;
     private final SegmentGraph sg;
     private final NetworkState state;
     private final Options options;
     private final BitSet before;
     private final int[] hops;
+    /** Services with a critical customer, once per instance. */
+    private final BitSet critical;
+    /** Services that lie in a segment (on active pipe). */
+    private final BitSet inSegment;
+    /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
+    private final java.util.concurrent.atomic.AtomicReferenceArray<List<String>> inletValvesCache;
+    private volatile int[] stationKindValves;
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
     public Isolation(ValveSegments segments, Options options) {
+        this(segments, options, false);
+    }
+
+    /**
+     * With {@code plain}, every core is computed the plain way (region grown from the
+     * whole seed, the whole boundary scanned); the tests compare it with the default.
+     */
+    Isolation(ValveSegments segments, Options options, boolean plain) {
+        this.plain = plain;
         this.segs = segments;
         this.sg = segments.graph();
         this.state = segments.state();
         this.options = options;
         this.before = sg.reachFromSources(null, null);
         this.hops = hopsFromSources();
+        List<Service> all = state.network().services();
+        this.critical = new BitSet(all.size());
+        for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
+        this.inSegment = new BitSet(all.size());
+        for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
+        this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
     /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
@@ -159,13 +192,14 @@ public final class Isolation {
     public Result isolate(Zone zone) {
         if (index == null && !(zone instanceof Zone.OfSegments) && !(zone instanceof Zone.OfMains)) index = new EdgeIndex(segs);
         BitSet zoneSegs = ZoneSegments.of(zone, segs, index);
-        Core core = core(zoneSegs);
+        Core core = core(grow(zoneSegs), true);
         List<Fallback> fallbacks = new ArrayList<>();
         Alternative alt = null;
         for (int i = 0; i < core.listed.size(); i++) {
             int l = core.listed.get(i);
             int v = sg.linkFeature(l);
-            Core grown = core(with(core.region, core.far.get(i)));
+            Core grown = plain ? core(grow(with(core.region, core.far.get(i))), true)
+                    : core(grownBy(core.region, core.far.get(i)), false);
             String why = whyFallback(v);
             if (why != null) fallbacks.add(fallback(v, why, core, grown));
             boolean noWorse = grown.sources.size() <= core.sources.size()
@@ -173,17 +207,29 @@ public final class Isolation {
             if (noWorse && grown.listed.size() < core.listed.size()
                     && (alt == null || grown.listed.size() < alt.valves().size()
                         || (grown.listed.size() == alt.valves().size()
-                            && added(core, grown).size() < alt.addedServices().size()))) {
-                alt = new Alternative(ordered(grown), ids(added(core, grown)), meters(added(core, grown)));
+                            && addedCount(core, grown) < alt.addedServices().size()))) {
+                BitSet addedSegs = addedSegments(core, grown);
+                alt = new Alternative(ordered(grown), ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
             }
         }
         return result(zoneSegs, core, fallbacks, alt);
     }
 
+    /**
+     * The region grown across segment {@code seg}: {@code region} is already closed under
+     * growth across open inoperable valves, so growing the union only needs a search from
+     * {@code seg}, with the region counted as visited (same set as growing the union).
+     */
     private static BitSet with(BitSet b, int seg) {
         BitSet c = (BitSet) b.clone();
         c.set(seg);
         return c;
+    }
+
+    private BitSet grownBy(BitSet region, int seg) {
+        BitSet seed = new BitSet(sg.segmentCount());
+        seed.set(seg);
+        return growInto((BitSet) region.clone(), seed);
     }
 
     /** The isolation of a seed set of segments, without fallbacks. */
@@ -191,65 +237,151 @@ public final class Isolation {
         BitSet region;
         BitSet after;
         BitSet off;
-        BitSet offServices;
+        /** Services of the off segments; built only when asked for ({@link #offServices()}). */
+        private BitSet offServices;
         final List<Integer> listed = new ArrayList<>();
         final List<Integer> far = new ArrayList<>();
-        final List<String> closedBounds = new ArrayList<>();
-        final List<String> unlisted = new ArrayList<>();
+        /** Links (not ids: only the plan's core is reported) of closed and of unlisted bounding valves. */
+        int[] closedBounds = new int[8];
+        int closedCount;
+        int[] unlisted = new int[64];
+        int unlistedCount;
         final List<String> sources = new ArrayList<>();
         final List<Integer> stations = new ArrayList<>();
+
+        /** Services off: those of the off segments (each service lies in one segment). */
+        BitSet offServices() {
+            if (offServices == null) offServices = servicesOf(off);
+            return offServices;
+        }
     }
 
-    private Core core(BitSet seed) {
+    private BitSet servicesOf(BitSet segments) {
+        if (segments.cardinality() * 2 > sg.segmentCount()) {
+            // most segments: start from every service that has a segment and clear the others
+            BitSet out = (BitSet) inSegment.clone();
+            for (int seg = segments.nextClearBit(0); seg < sg.segmentCount(); seg = segments.nextClearBit(seg + 1)) {
+                for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.clear(segs.serviceAt(i));
+            }
+            return out;
+        }
+        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
+            for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
+        }
+        return out;
+    }
+
+    private long metersOf(BitSet segments) {
+        long m = 0;
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += segs.meters(seg);
+        return m;
+    }
+
+    /**
+     * The isolation of a region already grown across open inoperable valves. With
+     * {@code report}, every bounding valve is classified (listed, already closed,
+     * unlisted); without, only the listed ones are found (all that fallbacks and the
+     * alternative need), from whichever side has fewer links to scan: the region's
+     * boundary or the segments still fed after. Both give the listed valves in the
+     * same order (region segment, then link index).
+     */
+    private Core core(BitSet region, boolean report) {
         Core c = new Core();
-        c.region = grow(seed);
+        c.region = region;
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
         }
-        BitSet stopLinks = new BitSet(sg.linkCount());
+        BitSet stopped = new BitSet(state.stationCount());
         for (int st = 0; st < state.stationCount(); st++) {
             int l = sg.stationLink(st);
             if (l < 0 || !sg.isOpen(l)) continue;
             if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
                 c.stations.add(st);
-                stopLinks.set(l);
+                stopped.set(st);
             }
         }
-        c.after = sg.reachFromSources(c.region, stopLinks);
-        for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
-            for (int i = sg.adjStart(seg); i < sg.adjEnd(seg); i++) {
-                int l = sg.adjLink(i);
-                if (!sg.isValve(l)) continue;
-                int o = sg.other(l, seg);
-                if (c.region.get(o)) continue;
-                String id = state.valveId(sg.linkFeature(l));
-                if (!sg.isOpen(l)) c.closedBounds.add(id);
-                else if (c.after.get(o)) {
-                    c.listed.add(l);
-                    c.far.add(o);
-                } else c.unlisted.add(id);
-            }
+        c.after = sg.reachFromSourcesStopping(c.region, stopped);
+        if (!report && crossLinks(c.after) < crossLinks(c.region)) {
+            listedFromFedSide(c);
+        } else {
+            scanBoundary(c);
         }
         c.off = (BitSet) before.clone();
         c.off.andNot(c.after);
-        c.offServices = new BitSet(state.serviceCount());
-        for (int seg = c.off.nextSetBit(0); seg >= 0; seg = c.off.nextSetBit(seg + 1)) {
-            for (int sv : segs.services(seg)) c.offServices.set(sv);
-        }
         return c;
+    }
+
+    private int crossLinks(BitSet set) {
+        int n = 0;
+        for (int seg = set.nextSetBit(0); seg >= 0; seg = set.nextSetBit(seg + 1)) n += sg.crossEnd(seg) - sg.crossStart(seg);
+        return n;
+    }
+
+    /**
+     * Listed valves found from the fed side: open valve links from a segment fed after
+     * into the region (the fed side never lies in the region). Sorted by (region
+     * segment, link) as {@link #scanBoundary} finds them.
+     */
+    private void listedFromFedSide(Core c) {
+        long[] keys = new long[16];
+        int n = 0;
+        for (int a = c.after.nextSetBit(0); a >= 0; a = c.after.nextSetBit(a + 1)) {
+            for (int i = sg.crossStart(a); i < sg.crossEnd(a); i++) {
+                int l = sg.crossLink(i);
+                if (!sg.isValve(l) || !sg.isOpen(l)) continue;
+                int r = sg.other(l, a);
+                if (!c.region.get(r)) continue;
+                if (n == keys.length) keys = java.util.Arrays.copyOf(keys, n * 2);
+                keys[n++] = ((long) r << 32) | l;
+            }
+        }
+        java.util.Arrays.sort(keys, 0, n);
+        for (int k = 0; k < n; k++) {
+            int l = (int) keys[k];
+            c.listed.add(l);
+            c.far.add(sg.other(l, (int) (keys[k] >>> 32)));
+        }
+    }
+
+    /** Every open or closed valve on the region's boundary, by region segment then link index. */
+    private void scanBoundary(Core c) {
+        for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
+            for (int i = sg.crossStart(seg); i < sg.crossEnd(seg); i++) {
+                int l = sg.crossLink(i);
+                if (!sg.isValve(l)) continue;
+                int o = sg.other(l, seg);
+                if (c.region.get(o)) continue;
+                if (!sg.isOpen(l)) {
+                    if (c.closedCount == c.closedBounds.length) c.closedBounds = java.util.Arrays.copyOf(c.closedBounds, c.closedCount * 2);
+                    c.closedBounds[c.closedCount++] = l;
+                } else if (c.after.get(o)) {
+                    c.listed.add(l);
+                    c.far.add(o);
+                } else {
+                    if (c.unlistedCount == c.unlisted.length) c.unlisted = java.util.Arrays.copyOf(c.unlisted, c.unlistedCount * 2);
+                    c.unlisted[c.unlistedCount++] = l;
+                }
+            }
+        }
     }
 
     /** The seed grown across open valves with operable = no; O(segments + links). */
     BitSet grow(BitSet seed) {
-        BitSet region = (BitSet) seed.clone();
+        return growInto(new BitSet(sg.segmentCount()), seed);
+    }
+
+    /** Adds the seed and everything reached from it across open inoperable valves to {@code region}. */
+    private BitSet growInto(BitSet region, BitSet seed) {
+        region.or(seed);
         int[] stack = new int[Math.max(1, sg.segmentCount())];
         int top = 0;
         for (int s = seed.nextSetBit(0); s >= 0; s = seed.nextSetBit(s + 1)) stack[top++] = s;
         while (top > 0) {
             int u = stack[--top];
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
+            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
+                int l = sg.crossLink(i);
                 if (!sg.isOpenInoperable(l)) continue;
                 int w = sg.other(l, u);
                 if (!region.get(w)) {
@@ -309,15 +441,27 @@ public final class Isolation {
         for (int l : core.listed) before.add(state.valveId(sg.linkFeature(l)));
         List<String> then = new ArrayList<>();
         for (String id : all) if (!before.contains(id)) then.add(id);
-        BitSet add = added(core, grown);
+        BitSet addedSegs = addedSegments(core, grown);
         boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
-        return new Fallback(state.valveId(v), why, isolable, all, then, ids(add), meters(add));
+        return new Fallback(state.valveId(v), why, isolable, all, then, ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
     }
 
-    private static BitSet added(Core core, Core grown) {
-        BitSet add = (BitSet) grown.offServices.clone();
-        add.andNot(core.offServices);
+    /**
+     * Segments off in {@code grown} but not in {@code core}. Services off are the union of
+     * the services of the off segments and every service lies in one segment, so the
+     * services added are exactly those of these segments.
+     */
+    private static BitSet addedSegments(Core core, Core grown) {
+        BitSet add = (BitSet) grown.off.clone();
+        add.andNot(core.off);
         return add;
+    }
+
+    private int addedCount(Core core, Core grown) {
+        BitSet add = addedSegments(core, grown);
+        int n = 0;
+        for (int seg = add.nextSetBit(0); seg >= 0; seg = add.nextSetBit(seg + 1)) n += segs.serviceCount(seg);
+        return n;
     }
 
     private List<ValveStep> steps(Core c) {
@@ -339,6 +483,10 @@ public final class Isolation {
         return ids;
     }
 
+    private List<String> valveIds(int[] links, int n) {
+        return new ValveIdList(state, sg, links, n);
+    }
+
     private List<String> ids(BitSet services) {
         List<String> out = new ArrayList<>();
         List<Service> all = state.network().services();
@@ -346,12 +494,6 @@ public final class Isolation {
         return out;
     }
 
-    private long meters(BitSet services) {
-        long m = 0;
-        List<Service> all = state.network().services();
-        for (int i = services.nextSetBit(0); i >= 0; i = services.nextSetBit(i + 1)) m += all.get(i).meters();
-        return m;
-    }
 
     private Result result(BitSet zoneSegs, Core c, List<Fallback> fallbacks, Alternative alt) {
         List<String> stationIds = new ArrayList<>();
@@ -376,26 +518,52 @@ public final class Isolation {
         }
         BitSet unintended = (BitSet) c.off.clone();
         unintended.andNot(c.region);
-        List<String> critical = new ArrayList<>();
-        List<Service> all = state.network().services();
-        for (int i = c.offServices.nextSetBit(0); i >= 0; i = c.offServices.nextSetBit(i + 1)) {
-            if (all.get(i).isCritical()) critical.add(all.get(i).id());
-        }
+        BitSet offServices = c.offServices();
+        BitSet criticalOff = new BitSet();
+        for (int i = critical.nextSetBit(0); i >= 0; i = critical.nextSetBit(i + 1)) if (offServices.get(i)) criticalOff.set(i);
         boolean isolable = reason.length() == 0;
-        return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), c.closedBounds,
-                c.unlisted, c.sources, stationIds, inletValves, c.offServices, ids(c.offServices),
-                meters(c.offServices), critical, fallbacks, Optional.ofNullable(alt));
+        return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), valveIds(c.closedBounds, c.closedCount),
+                valveIds(c.unlisted, c.unlistedCount), c.sources, stationIds, inletValves, offServices, ServiceIdList.owning(state.network().services(), offServices),
+                metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
     }
 
     /** Valves of kind station on the station's inlet system within the point tolerance of it. */
     private List<String> inletValves(int st) {
+        List<String> cached = inletValvesCache.get(st);
+        if (cached == null) {
+            cached = List.copyOf(findInletValves(st));
+            inletValvesCache.compareAndSet(st, null, cached);
+        }
+        return cached;
+    }
+
+    /** Indices of the valves of kind station, in index order (one scan of the valves, on first use). */
+    private int[] stationKindValves() {
+        int[] a = stationKindValves;
+        if (a == null) {
+            List<Valve> vs = state.network().valves();
+            int c = 0;
+            a = new int[16];
+            for (int i = 0; i < vs.size(); i++) {
+                if (vs.get(i).kind() != ValveKind.STATION) continue;
+                if (c == a.length) a = java.util.Arrays.copyOf(a, c * 2);
+                a[c++] = i;
+            }
+            a = java.util.Arrays.copyOf(a, c);
+            stationKindValves = a;
+        }
+        return a;
+    }
+
+    private List<String> findInletValves(int st) {
         Network net = state.network();
         Station station = net.stations().get(st);
         double tol = state.topology().tolerances().pointM();
         List<String> out = new ArrayList<>();
         Point at = station.geometry();
-        for (Valve v : net.valves()) {
-            if (v.kind() != ValveKind.STATION || !Objects.equals(v.systemId(), station.inSys())) continue;
+        for (int i : stationKindValves()) {
+            Valve v = net.valves().get(i);
+            if (!Objects.equals(v.systemId(), station.inSys())) continue;
             if (at != null && v.geometry() != null && v.geometry().distance(at) <= tol) out.add(v.id());
         }
         return out;

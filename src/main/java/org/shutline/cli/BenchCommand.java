@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryMXBean;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
@@ -42,10 +43,15 @@ import picocli.CommandLine.Spec;
  * generates synthetic grid towns, writes each as a GeoPackage, and measures on it: the
  * raw read of all features (baseline 1), load plus topology build, feed trace (live set
  * only, and with per-station attribution), single isolations of random points (median
- * and 95th percentile, whole-network scope), the all-cases tables against the plain
+ * and 95th percentile, whole-network scope), single isolations of random segments (most
+ * of them isolable by valves, unlike random points in a grid town), the all-cases tables against the plain
  * per-segment traversal loop (baseline 2; sampled and extrapolated on large networks),
  * and heap in use. Prints a Markdown table (docs/performance.md explains it).
- * Times are wall-clock on this machine; read the ratios, which hold on a noisy machine.
+ * Times are wall-clock on this machine; read the ratios, which hold better on a noisy
+ * machine. The read and load+topology are also timed in CPU time of the measuring
+ * thread (the CPU ratio column), which other processes on a shared machine do not
+ * inflate; GC threads are not counted there. Isolations are timed alone and also
+ * together with reading every service id off (the result's id list is resolved lazily).
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
     description = "Benchmark load, topology, trace, isolation and all-cases tables on generated networks.")
@@ -68,8 +74,9 @@ public final class BenchCommand implements Callable<Integer> {
     private Path work;
 
     /** One network's figures, times in milliseconds. */
-    record Row(int mains, int nodes, int edges, int services, int segments, double rawRead, double loadTopo, double traceLive,
-               double traceFull, double isoMedian, double isoP95, double tables, double brute, boolean bruteSampled, double heapMb) {
+    record Row(int mains, int nodes, int edges, int services, int segments, double rawRead, double loadTopo,
+               double rawReadCpu, double loadTopoCpu, double traceLive,
+               double traceFull, double isoMedian, double isoP95, double isoIdsMedian, double segIsoMedian, double segIsoP95, double tables, double brute, boolean bruteSampled, double heapMb) {
     }
 
     @Override
@@ -101,19 +108,25 @@ public final class BenchCommand implements Callable<Integer> {
             town.writeGeoPackage(file, Progress.NONE);
         }
         // baseline 1: the raw read of all features into the model, no graph (best of two, the first also warms up)
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
         double raw = Double.MAX_VALUE;
+        double rawCpu = Double.MAX_VALUE;
         for (int i = 0; i < 2; i++) {
             gc();
+            long c0 = threads.getCurrentThreadCpuTime();
             long t0 = System.nanoTime();
             Network net = NetworkReader.read(file, FieldMapping.DEFAULT);
             raw = Math.min(raw, ms(t0));
+            rawCpu = Math.min(rawCpu, (threads.getCurrentThreadCpuTime() - c0) / 1e6);
             if (net.mains().isEmpty()) throw new IllegalStateException("no mains read");
         }
         gc();
+        long c0 = threads.getCurrentThreadCpuTime();
         long t0 = System.nanoTime();
         Network net2 = NetworkReader.read(file, FieldMapping.DEFAULT);
         Topology topo = NetworkBuilder.build(net2, Tolerances.DEFAULT);
         double loadTopo = ms(t0);
+        double loadTopoCpu = (threads.getCurrentThreadCpuTime() - c0) / 1e6;
         NetworkState state = NetworkState.of(topo);
 
         double live = best(3, () -> FeedTrace.fedServices(state));
@@ -122,6 +135,7 @@ public final class BenchCommand implements Callable<Integer> {
         ValveSegments segs = ValveSegments.build(state);
         Isolation iso = new Isolation(segs, Isolation.Options.defaults(LocalDate.of(2026, 12, 1)));
         double[] isoTimes = isolations(topo, iso);
+        double[] segTimes = segmentIsolations(segs.segmentCount(), iso);
 
         t0 = System.nanoTime();
         OutageTables tables = OutageTables.build(segs);
@@ -135,7 +149,7 @@ public final class BenchCommand implements Callable<Integer> {
         gc();
         double heap = mem.getHeapMemoryUsage().getUsed() / 1048576.0;
         return new Row(n, topo.graph().nodeCount(), topo.graph().edgeCount(), net2.services().size(), segCount, raw, loadTopo,
-                live, full, isoTimes[0], isoTimes[1], tablesMs, bruteMs, sampled, heap);
+                rawCpu, loadTopoCpu, live, full, isoTimes[0], isoTimes[1], isoTimes[2], segTimes[0], segTimes[1], tablesMs, bruteMs, sampled, heap);
     }
 
     /**
@@ -172,14 +186,41 @@ public final class BenchCommand implements Callable<Integer> {
         int warm = Math.min(50, zones);
         for (int i = 0; i < warm; i++) iso.isolate(randomZone(rnd, env));
         double[] t = new double[zones];
+        double[] withIds = new double[zones];
+        long sink = 0;
         for (int i = 0; i < zones; i++) {
             Zone z = randomZone(rnd, env);
+            long t0 = System.nanoTime();
+            Isolation.Result r = iso.isolate(z);
+            t[i] = ms(t0);
+            for (String id : r.serviceIdsOff()) sink += id.length();
+            withIds[i] = ms(t0);
+        }
+        if (sink < 0) throw new IllegalStateException();
+        Arrays.sort(t);
+        Arrays.sort(withIds);
+        return new double[] {t[zones / 2], t[(int) Math.min(zones - 1, Math.ceil(zones * 0.95) - 1)], withIds[zones / 2]};
+    }
+
+    /**
+     * Isolations of single segments (random segments, up to {@code zones} of them): unlike
+     * random points, which in a grid town nearly always fall in the one large segment,
+     * most of these are isolable by valves, the other branch of the computation.
+     */
+    private double[] segmentIsolations(int segCount, Isolation iso) {
+        Random rnd = new Random(seed + 1);
+        int n = Math.min(zones, segCount);
+        if (n == 0) return new double[] {Double.NaN, Double.NaN};
+        for (int i = 0; i < Math.min(50, n); i++) iso.isolate(new Zone.OfSegments(new int[] {rnd.nextInt(segCount)}));
+        double[] t = new double[n];
+        for (int i = 0; i < n; i++) {
+            Zone z = new Zone.OfSegments(new int[] {rnd.nextInt(segCount)});
             long t0 = System.nanoTime();
             iso.isolate(z);
             t[i] = ms(t0);
         }
         Arrays.sort(t);
-        return new double[] {t[zones / 2], t[(int) Math.min(zones - 1, Math.ceil(zones * 0.95) - 1)]};
+        return new double[] {t[n / 2], t[(int) Math.min(n - 1, Math.ceil(n * 0.95) - 1)]};
     }
 
     private static Zone randomZone(Random rnd, org.locationtech.jts.geom.Envelope env) {
@@ -206,23 +247,26 @@ public final class BenchCommand implements Callable<Integer> {
     }
 
     static String line(Row r) {
-        return String.format(Locale.ROOT, "  %d mains: read %.0f ms, load+topology %.0f ms (%.2fx), trace %.1f ms live / %.0f ms full, "
-                        + "isolation median %.3f ms p95 %.3f ms, tables %.0f ms vs brute force %.0f ms%s (%.0fx), heap %.0f MB",
-                r.mains(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(),
-                r.tables(), r.brute(), r.bruteSampled() ? " (extrapolated)" : "", r.brute() / r.tables(), r.heapMb());
+        return String.format(Locale.ROOT, "  %d mains: read %.0f ms, load+topology %.0f ms (%.2fx; main-thread CPU %.0f / %.0f ms, %.2fx), trace %.1f ms live / %.0f ms full, "
+                        + "isolation median %.3f ms p95 %.3f ms (median %.3f ms reading every id off), single segments median %.3f ms p95 %.3f ms, tables %.0f ms vs brute force %.0f ms%s (%.0fx), heap %.0f MB",
+                r.mains(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(), r.rawReadCpu(), r.loadTopoCpu(),
+                r.loadTopoCpu() / r.rawReadCpu(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.isoIdsMedian(),
+                r.segIsoMedian(), r.segIsoP95(), r.tables(), r.brute(), r.bruteSampled() ? " (extrapolated)" : "", r.brute() / r.tables(), r.heapMb());
     }
 
     static String table(List<Row> rows) {
         StringBuilder sb = new StringBuilder();
-        sb.append("| mains | nodes | edges | services | segments | raw read ms | load+topology ms | ratio | trace live ms | trace with stations ms | isolation median ms | isolation p95 ms | all-cases tables ms | brute force ms | speed-up | heap MB |\n");
-        sb.append("|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|\n");
+        sb.append("| mains | nodes | edges | services | segments | raw read ms | load+topology ms | ratio | CPU ratio | trace live ms | trace with stations ms | isolation median ms | isolation p95 ms | isolation + ids read median ms | segment isolation median ms | segment isolation p95 ms | all-cases tables ms | brute force ms | speed-up | heap MB |\n");
+        sb.append("|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|\n");
         for (Row r : rows) {
-            sb.append(String.format(Locale.ROOT, "| %d | %d | %d | %d | %d | %.0f | %.0f | %.2f | %.1f | %.0f | %.3f | %.3f | %.0f | %.0f%s | %.0fx | %.0f |%n",
+            sb.append(String.format(Locale.ROOT, "| %d | %d | %d | %d | %d | %.0f | %.0f | %.2f | %.2f | %.1f | %.0f | %.3f | %.3f | %.3f | %.3f | %.3f | %.0f | %.0f%s | %.0fx | %.0f |%n",
                     r.mains(), r.nodes(), r.edges(), r.services(), r.segments(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(),
-                    r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.tables(), r.brute(), r.bruteSampled() ? "*" : "",
+                    r.loadTopoCpu() / r.rawReadCpu(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.isoIdsMedian(),
+                    r.segIsoMedian(), r.segIsoP95(), r.tables(), r.brute(), r.bruteSampled() ? "*" : "",
                     r.brute() / r.tables(), r.heapMb()));
         }
         sb.append("\n`*` brute force timed on a random sample of segments and scaled to all segments.\n");
+        sb.append("CPU ratio: the same ratio in CPU time of the measuring thread (GC threads not counted).\n");
         return sb.toString();
     }
 

@@ -68,6 +68,14 @@ final class InputCheck {
         systemIds = sys.toArray(new String[0]);
         systemHasLine = new boolean[systemIds.length];
         boolean[] mainOk = firstOfId(mains, FindingCodes.MAINS, out);
+        long parts = 0, vertices = 0;
+        for (Main m : mains) {
+            Geometry g = m.geometry();
+            if (g == null) continue;
+            parts += g.getNumGeometries();
+            vertices += g.getNumPoints();
+        }
+        if (parts < Integer.MAX_VALUE / 2 && vertices < Integer.MAX_VALUE / 2) lines.reserve((int) parts, (int) vertices);
         for (int i = 0; i < mains.size(); i++) {
             Main m = mains.get(i);
             if (!mainById.containsKey(key(m.id()))) mainById.put(key(m.id()), i);

@@ -2,21 +2,18 @@ package org.shutline.topology;
 
 import java.util.Arrays;
 import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.LineString;
-import org.locationtech.jts.index.strtree.STRtree;
 
 /**
  * The usable lines of the mains: one line per part of a main (a LineString is one
  * part), with its vertices and cumulative measures (length along the part, CRS units)
- * in flat arrays, and a JTS {@link STRtree} over chunks of at most {@link #CHUNK}
- * segments for proximity queries.
+ * in flat arrays, and a {@link ChunkGrid} (uniform grid) over chunks of at most
+ * {@link #CHUNK} segments for proximity queries.
  *
  * <p>Why chunks: indexing whole lines lets one long main with thousands of vertices
  * turn every nearby query into a scan of all its segments; indexing every segment
- * costs an index entry per vertex. Chunks of 32 segments bound both. Queries cost
- * O(log n + k) for k chunks near the query point (STR packing: Leutenegger, Lopez and
- * Edgington, 1997).
+ * costs an index entry per vertex. Chunks of 32 segments bound both. A query costs
+ * O(c + k) for the c grid cells and k chunks near the query point (see ChunkGrid).
  */
 final class LineSet {
     static final int CHUNK = 32;
@@ -34,7 +31,21 @@ final class LineSet {
     private int[] chunkLine;
     private int[] chunkSeg0;
     private int[] chunkSeg1;
-    private STRtree tree;
+    private ChunkGrid grid;
+
+    /** Makes room for {@code lines} more lines and {@code vertices} more vertices (a hint; add grows anyway). */
+    void reserve(int lines, int vertices) {
+        if (count + lines > lineMain.length) {
+            lineMain = Arrays.copyOf(lineMain, count + lines);
+            linePart = Arrays.copyOf(linePart, count + lines);
+            vStart = Arrays.copyOf(vStart, count + lines + 1);
+        }
+        if (vCount + vertices > xs.length) {
+            xs = Arrays.copyOf(xs, vCount + vertices);
+            ys = Arrays.copyOf(ys, vCount + vertices);
+            ms = Arrays.copyOf(ms, vCount + vertices);
+        }
+    }
 
     /** Adds a line (a part of main {@code main}); returns its line index. */
     int add(int main, int part, LineString ls) {
@@ -42,8 +53,8 @@ final class LineSet {
         if (count == lineMain.length) {
             lineMain = Arrays.copyOf(lineMain, count * 2);
             linePart = Arrays.copyOf(linePart, count * 2);
-            vStart = Arrays.copyOf(vStart, count * 2 + 1);
         }
+        if (count + 2 > vStart.length) vStart = Arrays.copyOf(vStart, count * 2 + 2);
         while (vCount + n > xs.length) {
             xs = Arrays.copyOf(xs, xs.length * 2);
             ys = Arrays.copyOf(ys, ys.length * 2);
@@ -76,25 +87,34 @@ final class LineSet {
         chunkLine = new int[chunks];
         chunkSeg0 = new int[chunks];
         chunkSeg1 = new int[chunks];
-        tree = new STRtree();
+        double[] minX = new double[chunks], minY = new double[chunks], maxX = new double[chunks], maxY = new double[chunks];
         for (int l = 0; l < count; l++) {
             int segs = segments(l);
             int s = 0;
             do {
                 int e = Math.min(segs, s + CHUNK);
-                Envelope env = new Envelope();
+                double ax = Double.POSITIVE_INFINITY, ay = Double.POSITIVE_INFINITY;
+                double bx = Double.NEGATIVE_INFINITY, by = Double.NEGATIVE_INFINITY;
                 int v0 = vStart[l] + s;
                 int v1 = vStart[l] + Math.max(e, s + 1);
-                for (int v = v0; v <= Math.min(v1, vStart[l + 1] - 1); v++) env.expandToInclude(xs[v], ys[v]);
+                for (int v = v0; v <= Math.min(v1, vStart[l + 1] - 1); v++) {
+                    ax = Math.min(ax, xs[v]);
+                    ay = Math.min(ay, ys[v]);
+                    bx = Math.max(bx, xs[v]);
+                    by = Math.max(by, ys[v]);
+                }
+                minX[chunkCount] = ax;
+                minY[chunkCount] = ay;
+                maxX[chunkCount] = bx;
+                maxY[chunkCount] = by;
                 chunkLine[chunkCount] = l;
                 chunkSeg0[chunkCount] = s;
                 chunkSeg1[chunkCount] = Math.max(e, s + 1);
-                tree.insert(env, chunkCount);
                 chunkCount++;
                 s = e;
             } while (s < segs);
         }
-        tree.build();
+        grid = new ChunkGrid(minX, minY, maxX, maxY, chunkCount);
     }
 
     int count() { return count; }
@@ -130,8 +150,7 @@ final class LineSet {
 
     /** Chunk ids whose envelope lies within d of (x, y), appended to {@code out}. */
     void query(double x, double y, double d, IntList out) {
-        out.clear();
-        tree.query(new Envelope(x - d, x + d, y - d, y + d), item -> out.add((Integer) item));
+        grid.query(x - d, y - d, x + d, y + d, out);
     }
 
     int chunkLine(int c) { return chunkLine[c]; }

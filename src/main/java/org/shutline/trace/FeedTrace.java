@@ -29,9 +29,12 @@ import org.shutline.topology.EdgeKind;
  * count twice). <em>Dead mains</em> are active mains with no live pipe edge (active
  * mains that have no edge at all included).
  *
- * <p>Cost: one BFS from the sources plus two per live station (reach, and the trace with
- * that station out), each O(nodes + edges); stations are few. Cancellation is checked
- * every 4096 nodes.
+ * <p>Cost: {@link #fedServices} is one search from the sources, O(nodes + edges), reading
+ * the frozen graph's arrays directly when the state has no overlay. {@link #run} builds
+ * the valve segments once, O(nodes + edges + services), then does two searches of the
+ * much smaller segment graph per live station (reach, and the trace with that station
+ * out) plus the output sets ({@link StationAttribution}). Cancellation is checked every
+ * 4096 nodes and once per station.
  */
 public final class FeedTrace {
     private FeedTrace() {}
@@ -115,7 +118,21 @@ public final class FeedTrace {
         return run(s, Progress.NONE);
     }
 
+    /**
+     * The full trace with per-station attribution, computed on the valve-segment graph
+     * ({@link StationAttribution}): O(nodes + edges + services) once, then per live
+     * station two searches of the segment graph plus its output sets.
+     */
     public static Result run(NetworkState s, Progress progress) {
+        return StationAttribution.run(s, progress);
+    }
+
+    /**
+     * The same result by two searches of the whole node graph per live station (the
+     * plain method, O(stations x (nodes + edges))); kept as the reference the tests
+     * compare {@link #run} against.
+     */
+    static Result runByNodeSearch(NetworkState s, Progress progress) {
         progress.begin("feed trace", s.stationCount() * 2L + 1);
         Flow flow = new Flow(s, progress);
         int[] sources = flow.sourceNodes();
@@ -176,7 +193,7 @@ public final class FeedTrace {
         return out;
     }
 
-    private static BitSet deadMains(NetworkState s, BitSet liveEdges) {
+    static BitSet deadMains(NetworkState s, BitSet liveEdges) {
         BitSet hasLive = new BitSet(s.mainCount());
         for (int e = liveEdges.nextSetBit(0); e >= 0; e = liveEdges.nextSetBit(e + 1)) hasLive.set(s.edgeFeature(e));
         BitSet dead = new BitSet(s.mainCount());

@@ -4,6 +4,7 @@ import java.util.BitSet;
 import org.shutline.model.MainStatus;
 import org.shutline.model.Progress;
 import org.shutline.topology.EdgeKind;
+import org.shutline.topology.Graph;
 
 /**
  * Breadth-first gas flow over one {@link NetworkState}: through pipe edges of active
@@ -56,6 +57,7 @@ final class Flow {
      * station {@code blockedStation} (-1 for none).
      */
     BitSet reach(int[] starts, int blockedStation) {
+        if (s.isBase()) return reachBase(starts, blockedStation);
         BitSet seen = new BitSet(s.nodeCount());
         int head = 0, tail = 0;
         for (int v : starts) {
@@ -85,9 +87,103 @@ final class Flow {
         return seen;
     }
 
+    /**
+     * {@link #reach} on a state with no overlay: reads the base's packed flow adjacency
+     * ({@link NetworkState#baseFlowAdjacency()}, one sequential array per node) with a
+     * boolean array for the visited nodes; same rules and same result.
+     */
+    private BitSet reachBase(int[] starts, int blockedStation) {
+        Graph g = s.graph();
+        long[] adj = s.baseFlowAdjacency();
+        if (adj == null) return reachBaseEdges(starts, blockedStation);
+        int n = g.nodeCount();
+        boolean[] seen = new boolean[n];
+        int head = 0, tail = 0;
+        for (int v : starts) {
+            if (v >= 0 && !seen[v]) {
+                seen[v] = true;
+                queue[tail++] = v;
+            }
+        }
+        while (head < tail) {
+            int v = queue[head++];
+            if ((head & 0xFFF) == 0) progress.checkCancelled();
+            for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
+                long c = adj[i];
+                int w = (int) c;
+                if (seen[w]) continue;
+                int f = (int) (c >>> 34);
+                int code = (int) (c >>> 32) & 3;
+                boolean pass;
+                if (code == NetworkState.FLOW_PIPE) pass = mainActive[f];
+                else if (code == NetworkState.FLOW_VALVE) pass = !closed.get(f);
+                else pass = code == NetworkState.FLOW_STATION_OUT && stationOn[f] && f != blockedStation;
+                if (pass) {
+                    seen[w] = true;
+                    queue[tail++] = w;
+                }
+            }
+        }
+        BitSet out = new BitSet(n);
+        for (int i = 0; i < tail; i++) out.set(queue[i]);
+        return out;
+    }
+
+    /**
+     * {@link #reachBase} reading the frozen graph's edge arrays, for a graph whose
+     * features do not fit the packed adjacency.
+     */
+    private BitSet reachBaseEdges(int[] starts, int blockedStation) {
+        Graph g = s.graph();
+        BitSet seen = new BitSet(g.nodeCount());
+        int head = 0, tail = 0;
+        for (int v : starts) {
+            if (v >= 0 && !seen.get(v)) {
+                seen.set(v);
+                queue[tail++] = v;
+            }
+        }
+        int steps = 0;
+        while (head < tail) {
+            int v = queue[head++];
+            if ((++steps & 0xFFF) == 0) progress.checkCancelled();
+            for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
+                int e = g.adjEdge(i);
+                int f = g.edgeFeature(e);
+                byte k = g.edgeKind(e);
+                int w;
+                if (k == EdgeKind.PIPE) {
+                    if (!mainActive[f]) continue;
+                    w = g.opposite(e, v);
+                } else if (k == EdgeKind.VALVE) {
+                    if (closed.get(f)) continue;
+                    w = g.opposite(e, v);
+                } else if (k == EdgeKind.STATION) {
+                    w = g.edgeTo(e);
+                    if (!stationOn[f] || g.edgeFrom(e) != v || w == v || f == blockedStation) continue;
+                } else {
+                    continue;
+                }
+                if (!seen.get(w)) {
+                    seen.set(w);
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return seen;
+    }
+
     /** Services fed when {@code live} is the set of live nodes: on a live pipe edge with live ends. */
     BitSet fedServices(BitSet live) {
         BitSet fed = new BitSet(s.serviceCount());
+        if (s.isBase()) {
+            Graph g = s.graph();
+            for (int i = 0, n = g.serviceCount(); i < n; i++) {
+                int e = g.serviceEdge(i);
+                if (e >= 0 && g.edgeKind(e) == EdgeKind.PIPE && mainActive[g.edgeFeature(e)] && live.get(g.edgeFrom(e))) fed.set(i);
+            }
+            return fed;
+        }
         for (int i = 0; i < s.serviceCount(); i++) {
             int e = s.serviceEdge(i);
             if (e < 0 || s.isRemoved(e) || s.edgeKind(e) != EdgeKind.PIPE) continue;

@@ -65,6 +65,56 @@ public final class NetworkState {
             for (int v = 0; v < g.nodeCount(); v++) md = Math.max(md, g.degree(v));
             maxDegree = md;
         }
+
+        /** See {@link NetworkState#baseFlowAdjacency()}; built on first use. */
+        private volatile long[] flowAdjacency;
+
+        long[] flowAdjacency() {
+            long[] a = flowAdjacency;
+            if (a == null) {
+                a = buildFlowAdjacency(g);
+                flowAdjacency = a;
+            }
+            return a;
+        }
+    }
+
+    /** Largest feature index the packed adjacency holds (30 bits). */
+    static final int FLOW_FEATURE_LIMIT = 1 << 30;
+    static final int FLOW_PIPE = 0, FLOW_VALVE = 1, FLOW_STATION_OUT = 2, FLOW_NONE = 3;
+
+    private static long[] buildFlowAdjacency(Graph g) {
+        int total = g.nodeCount() == 0 ? 0 : g.adjEnd(g.nodeCount() - 1);
+        long[] a = new long[total];
+        for (int v = 0; v < g.nodeCount(); v++) {
+            for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
+                int e = g.adjEdge(i);
+                int f = g.edgeFeature(e);
+                int code;
+                switch (g.edgeKind(e)) {
+                    case EdgeKind.PIPE -> code = FLOW_PIPE;
+                    case EdgeKind.VALVE -> code = FLOW_VALVE;
+                    case EdgeKind.STATION -> code = g.edgeFrom(e) == v && g.edgeTo(e) != v ? FLOW_STATION_OUT : FLOW_NONE;
+                    default -> code = FLOW_NONE;
+                }
+                if (f < 0 || f >= FLOW_FEATURE_LIMIT) return null;
+                a[i] = ((long) f << 34) | ((long) code << 32) | (g.opposite(e, v) & 0xFFFFFFFFL);
+            }
+        }
+        return a;
+    }
+
+    /**
+     * The base graph's adjacency packed for gas flow, one long per CSR entry of
+     * {@link Graph#adjEdge} (same order): bits 0-31 the node across the edge, bits 32-33
+     * {@link #FLOW_PIPE}, {@link #FLOW_VALVE}, {@link #FLOW_STATION_OUT} (a station edge
+     * seen from its inlet, the only way gas passes it) or {@link #FLOW_NONE}, bits 34-63 the
+     * edge's feature (main, valve or station index). Built once per base, O(edges), and
+     * shared by every state; null when a feature index does not fit in 30 bits. A search
+     * then reads one sequential array per node instead of four edge arrays at random.
+     */
+    long[] baseFlowAdjacency() {
+        return base.flowAdjacency();
     }
 
     private static final MainStatus[] STATUSES = MainStatus.values();

@@ -28,6 +28,8 @@ public final class SegmentGraph {
     private final boolean[] linkOpen;
     private final byte[] linkOperability;
     private final int[] adjStart, adjLink;
+    /** Adjacency without the links whose two sides are one segment (they never change a reach). */
+    private final int[] crossStart, crossLink;
     private final int[] valveLink, stationLink;
     private final int[] sourceSegment;
     private final BitSet sourceSegments;
@@ -75,6 +77,16 @@ public final class SegmentGraph {
         for (int l = 0; l < links; l++) {
             adjLink[fill[linkA[l]]++] = l;
             if (linkB[l] != linkA[l]) adjLink[fill[linkB[l]]++] = l;
+        }
+        crossStart = new int[segmentCount + 1];
+        for (int u = 0; u < segmentCount; u++) {
+            int c = 0;
+            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) c++;
+            crossStart[u + 1] = crossStart[u] + c;
+        }
+        crossLink = new int[crossStart[segmentCount]];
+        for (int u = 0, k = 0; u < segmentCount; u++) {
+            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) crossLink[k++] = adjLink[i];
         }
         sourceSegment = new int[s.sourceCount()];
         sourceSegments = new BitSet(segmentCount);
@@ -129,6 +141,16 @@ public final class SegmentGraph {
     public int adjEnd(int seg) { return adjStart[seg + 1]; }
     public int adjLink(int i) { return adjLink[i]; }
 
+    /**
+     * Like {@link #adjStart}, over the links of a segment whose other side is another
+     * segment (same order as the full adjacency, the one-segment links left out). In a
+     * meshed grid most valves have the one large segment on both sides; searches and
+     * boundary scans skip them this way.
+     */
+    public int crossStart(int seg) { return crossStart[seg]; }
+    public int crossEnd(int seg) { return crossStart[seg + 1]; }
+    public int crossLink(int i) { return crossLink[i]; }
+
     /** Link of a valve, or -1 when the valve is not attached or its edge is removed. */
     public int valveLink(int valve) { return valveLink[valve]; }
     public int stationLink(int station) { return stationLink[station]; }
@@ -166,9 +188,38 @@ public final class SegmentGraph {
         }
         while (head < tail) {
             int u = queue[head++];
-            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) {
-                int l = adjLink[i];
+            for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
+                int l = crossLink[i];
                 if (!canFlow(l, u) || (blockedLinks != null && blockedLinks.get(l))) continue;
+                int w = other(l, u);
+                if (seen.get(w) || (blocked != null && blocked.get(w))) continue;
+                seen.set(w);
+                queue[tail++] = w;
+            }
+        }
+        return seen;
+    }
+
+    /**
+     * Segments reached from the source segments, gas flowing by {@link #canFlow}, never
+     * entering a segment in {@code blocked} (may be null) nor passing a station in
+     * {@code stoppedStations} (station indices; may be null). O(segments + links).
+     */
+    public BitSet reachFromSourcesStopping(BitSet blocked, BitSet stoppedStations) {
+        BitSet seen = new BitSet(segmentCount);
+        int[] queue = new int[Math.max(1, segmentCount)];
+        int head = 0, tail = 0;
+        for (int seg : sourceSegment) {
+            if (seg >= 0 && !seen.get(seg) && (blocked == null || !blocked.get(seg))) {
+                seen.set(seg);
+                queue[tail++] = seg;
+            }
+        }
+        while (head < tail) {
+            int u = queue[head++];
+            for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
+                int l = crossLink[i];
+                if (!canFlow(l, u) || (stoppedStations != null && linkKind[l] == EdgeKind.STATION && stoppedStations.get(linkFeature[l]))) continue;
                 int w = other(l, u);
                 if (seen.get(w) || (blocked != null && blocked.get(w))) continue;
                 seen.set(w);

@@ -170,6 +170,12 @@ public final class ValveSegments {
     public int[] services(int seg) { return Arrays.copyOfRange(serviceList, serviceStart[seg], serviceStart[seg + 1]); }
     public int serviceCount(int seg) { return serviceStart[seg + 1] - serviceStart[seg]; }
     public long meters(int seg) { return meters[seg]; }
+    /** First index into {@link #serviceAt} of segment seg's services (CSR, services ascending). */
+    public int serviceStart(int seg) { return serviceStart[seg]; }
+    /** One past the last index into {@link #serviceAt} of segment seg's services. */
+    public int serviceEnd(int seg) { return serviceStart[seg + 1]; }
+    /** The i-th entry of the services-by-segment list (use with {@link #serviceStart}/{@link #serviceEnd}); no copy. */
+    public int serviceAt(int i) { return serviceList[i]; }
     /** True for a segment with no active pipe (see class comment). */
     public boolean isEmpty(int seg) { return mainCount(seg) == 0; }
     /** Valves (state indices) on the boundary of a segment. */
