@@ -282,6 +282,45 @@ public final class MainWindow extends JFrame {
         }, t -> failed("Cannot read plan " + f.getFileName(), t)));
     }
 
+    /**
+     * Exports the selected plan step (PDF report with map, map book, lists and charts; PNG,
+     * SVG, GeoPackage and GeoJSON result layers, CSV lists) into a chosen folder, in a
+     * background task: the same code as {@code shutline export}.
+     */
+    void exportStep() {
+        org.shutline.analysis.PlanEvaluation.Result r = plan.result();
+        int index = plan.selectedStep();
+        if (ws == null || r == null || index < 0) {
+            status("Export: open a work plan and select a step first");
+            return;
+        }
+        JFileChooser fc = chooser("lastExportDir");
+        fc.setFileSelectionMode(JFileChooser.DIRECTORIES_ONLY);
+        fc.setDialogTitle("Export step " + (index + 1) + " into folder");
+        if (fc.showSaveDialog(this) != JFileChooser.APPROVE_OPTION) return;
+        remember("lastExportDir", fc);
+        exportStepTo(fc.getSelectedFile().toPath());
+    }
+
+    /** Exports the selected step into {@code dir} in a background task (see {@link #exportStep()}). */
+    void exportStepTo(Path dir) {
+        org.shutline.analysis.PlanEvaluation.Result r = plan.result();
+        int index = plan.selectedStep();
+        if (ws == null || r == null || index < 0) return;
+        Path netFile = ws.file();
+        Path planFile = plan.file();
+        int step = r.steps().get(index).step().number();
+        run(new Task<>("export step " + step, p -> {
+            org.shutline.report.ReportView view = org.shutline.report.ReportView.ofStep(r, step,
+                    org.shutline.analysis.Isolation.Options.defaults(java.time.LocalDate.now()));
+            org.shutline.report.ReportBuilder b = org.shutline.report.ReportBuilder.of(view, netFile,
+                    org.shutline.report.ReportBuilder.Options.defaults());
+            if (planFile != null) b = b.withPlan(r, planFile);
+            return b.write(dir, p);
+        }, files -> status("Exported step " + step + ": " + files.size() + " files in " + dir),
+                t -> failed("Export of step " + step, t)));
+    }
+
     /** Adds the context layers of another GeoPackage or shapefile folder (read with the network reader). */
     void addContextLayer() {
         if (ws == null) return;
@@ -452,6 +491,7 @@ public final class MainWindow extends JFrame {
         file.add(recent);
         file.addSeparator();
         file.add(item("Save work plan", KeyEvent.VK_S, e -> savePlan()));
+        file.add(item("Export selected step...", 0, e -> exportStep()));
         file.addSeparator();
         file.add(item("Quit", KeyEvent.VK_Q, e -> closeWindow()));
         JMenu view = new JMenu("View");

@@ -349,6 +349,17 @@ class MainWindowDisplayTest {
         List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
         assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL "));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
+        // the File menu's export of the selected step writes the field package with the export command's code
+        Path out = java.nio.file.Files.createTempDirectory("shutline-window-export");
+        onEdt(() -> {
+            win.exportStepTo(out);
+            return null;
+        });
+        waitFor("step exported", () -> java.nio.file.Files.exists(out.resolve("customers.csv")));
+        try (org.apache.pdfbox.pdmodel.PDDocument pdf = org.apache.pdfbox.Loader.loadPDF(out.resolve("report.pdf").toFile())) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(pdf);
+            assertThat(text).contains("Step " + (hazardStep + 1)).contains("tap-on-dead-main").contains("CAUTION");
+        }
         if (System.getProperty("shutline.screenshot") != null) {
             // the picture for docs/screenshot-main.png: the work area in view around the first critical hazard
             onEdt(() -> {
