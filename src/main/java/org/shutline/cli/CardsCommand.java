@@ -43,7 +43,7 @@ import picocli.CommandLine.Spec;
  * valves that stop gas at the work site if gas blows at the excavation (with
  * fallbacks), and for each pressure system the phase touches the over-pressure
  * shut-off (station inlet valves, upstream fallback, services at risk). Prints the
- * cards and writes {@code emergency-cards.pdf} (one text page per phase, the caution at
+ * cards and writes {@code emergency-cards.pdf} (per phase a map page of the excavation isolation, when there is one, and a text page; the caution at
  * the foot; map pages are not drawn yet) into DIR. Exit 0, or 2 when the network or
  * plan cannot be read or the PDF cannot be written.
  */
@@ -105,6 +105,8 @@ public final class CardsCommand implements Callable<Integer> {
             List<Sheet> sheets = new ArrayList<>();
             PageFormat pf = new PageFormat(Paper.LETTER, false);
             for (EmergencyCards.Card c : cards) {
+                Sheet map = cardMap(ps, c, pf);
+                if (map != null) sheets.add(map);
                 sheets.addAll(TableSheets.layout("Emergency card: phase " + (c.phase() + 1) + " " + c.name(),
                         ps.plan().project() + " | " + t.network().sourceName() + " | state after the phase's steps",
                         List.of("item", "detail"), wrap(rows(t.network(), ps, c, grid), 54), pf));
@@ -141,6 +143,28 @@ public final class CardsCommand implements Callable<Integer> {
     }
 
     /** The card as item/detail rows for the PDF page. */
+    /**
+     * The map page of a card: the state after the phase, the excavation isolation at the
+     * phase's first work point (valves numbered, gas-off extent, the initial isolation
+     * circle of ERG Guide 115), drawn by the export's map sheet; null when the phase has no
+     * work point or nothing to isolate.
+     */
+    private Sheet cardMap(PlanStates ps, EmergencyCards.Card c, PageFormat pf) {
+        if (c.site() == null) return null;
+        org.shutline.plan.WorkPoint wp = null;
+        for (org.shutline.plan.StepState st : ps.steps()) {
+            if (st.step().phase() == c.phase() && !st.workPoints().isEmpty()) {
+                wp = st.workPoints().get(0);
+                break;
+            }
+        }
+        if (wp == null) return null;
+        org.shutline.report.ReportView view = org.shutline.report.ReportView.ofIncident(ps.afterPhase(c.phase()), c.site().isolation(),
+                "Emergency card: phase " + (c.phase() + 1) + " " + c.name() + ": gas blowing at the " + wp.kind() + " on " + wp.mainId(),
+                wp.x(), wp.y(), org.shutline.report.ReportView.ERG_115_ISOLATION_M, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M);
+        return org.shutline.report.ReportBuilder.of(view, network, org.shutline.report.ReportBuilder.Options.defaults().withPage(pf)).mapSheet();
+    }
+
     static List<List<String>> rows(Network net, PlanStates ps, EmergencyCards.Card c, GridSheets grid) {
         List<List<String>> rows = new ArrayList<>();
         rows.add(List.of("Work site", c.siteDescription()));

@@ -183,7 +183,14 @@ class EmergencyCommandsTest {
         assertThat(three.has("excavation")).isFalse();
         assertThat(three.get("work_site").asText()).contains("nothing to isolate");
         try (PDDocument pdf = Loader.loadPDF(dir.resolve("emergency-cards.pdf").toFile())) {
-            assertThat(pdf.getNumberOfPages()).isEqualTo(3);
+            // one text page per phase, and before phase 1's a map page of its excavation isolation
+            // (phase 3's pits reach no live pipe: no map)
+            assertThat(pdf.getNumberOfPages()).isEqualTo(4);
+            PDFTextStripper first = new PDFTextStripper();
+            first.setStartPage(1);
+            first.setEndPage(1);
+            String map = first.getText(pdf).replaceAll("\\s+", " ");
+            assertThat(map).contains("gas blowing at the tie-in").contains("r = 100 m").contains("Valve to close").contains("CAUTION");
             String text = new PDFTextStripper().getText(pdf).replaceAll("\\s+", " ");
             assertThat(text).contains("Emergency card: phase 1").contains("OVER-PRESSURE OF LP-SOUTH").contains("CAUTION");
         }
