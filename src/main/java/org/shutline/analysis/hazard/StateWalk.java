@@ -1,41 +1,39 @@
 package org.shutline.analysis.hazard;
 
-import java.util.BitSet;
 import org.shutline.topology.EdgeKind;
 import org.shutline.trace.NetworkState;
 
 /**
- * Plain reachability over a state's pipe: from start nodes through present pipe of
- * active mains and open valves, never through stations. O(nodes + edges), iterative.
+ * Connectivity over a state's pipe: present pipe of active mains and open valves, never
+ * stations. O(nodes + edges) for the whole state, iterative.
  */
 final class StateWalk {
     private StateWalk() {}
 
-    static BitSet reach(NetworkState s, int... starts) {
-        BitSet seen = new BitSet(s.nodeCount());
-        int[] stack = new int[Math.max(16, starts.length)];
-        int top = 0;
-        for (int v : starts) {
-            if (v < 0 || seen.get(v)) continue;
-            seen.set(v);
-            if (top == stack.length) stack = java.util.Arrays.copyOf(stack, top * 2);
-            stack[top++] = v;
+    /**
+     * Connected pieces of a state over present pipe of active mains and open valves
+     * (stations not crossed): the representative node of each node's piece, by a
+     * union-find with path halving, O(edges) for the whole state.
+     */
+    static int[] pieces(NetworkState s) {
+        int n = s.nodeCount();
+        int[] parent = new int[n];
+        for (int i = 0; i < n; i++) parent[i] = i;
+        for (int e = 0, m = s.edgeCount(); e < m; e++) {
+            if (!passable(s, e)) continue;
+            int a = find(parent, s.edgeFrom(e)), b = find(parent, s.edgeTo(e));
+            if (a != b) parent[Math.max(a, b)] = Math.min(a, b);
         }
-        int[] buf = s.adjacencyBuffer();
-        while (top > 0) {
-            int v = stack[--top];
-            int n = s.incidentEdges(v, buf);
-            for (int i = 0; i < n; i++) {
-                int e = buf[i];
-                if (!passable(s, e)) continue;
-                int w = s.opposite(e, v);
-                if (seen.get(w)) continue;
-                seen.set(w);
-                if (top == stack.length) stack = java.util.Arrays.copyOf(stack, top * 2);
-                stack[top++] = w;
-            }
+        for (int i = 0; i < n; i++) parent[i] = find(parent, i);
+        return parent;
+    }
+
+    static int find(int[] p, int x) {
+        while (p[x] != x) {
+            p[x] = p[p[x]];
+            x = p[x];
         }
-        return seen;
+        return x;
     }
 
     static boolean passable(NetworkState s, int e) {
@@ -45,8 +43,4 @@ final class StateWalk {
         return false;
     }
 
-    /** True when pipe edge e is reached: one of its ends is in {@code nodes} and the edge itself is passable. */
-    static boolean edgeReached(NetworkState s, BitSet nodes, int e) {
-        return passable(s, e) && (nodes.get(s.edgeFrom(e)) || nodes.get(s.edgeTo(e)));
-    }
 }

@@ -36,6 +36,7 @@ public final class StepContext {
     private FeedTrace.Result beforeTrace;
     private FeedTrace.Result afterTrace;
     private ValveSegments afterSegments;
+    private int[] afterPieces;
 
     public StepContext(StepState step, NetworkState base, FeedTrace.Result baseTrace, FeedTrace.Result beforeTrace,
                        FeedTrace.Result afterTrace, Settings settings) {
@@ -73,6 +74,15 @@ public final class StepContext {
     public ValveSegments afterSegments() {
         if (afterSegments == null) afterSegments = ValveSegments.build(after);
         return afterSegments;
+    }
+
+    /**
+     * The connected piece of every node of the state after the step, over present pipe of
+     * active mains and open valves, stations not crossed (computed once, shared by the rules).
+     */
+    public int[] afterPieces() {
+        if (afterPieces == null) afterPieces = StateWalk.pieces(after);
+        return afterPieces;
     }
 
     /** "step 7" or "the network as recorded". */

@@ -25,19 +25,15 @@ public final class SystemsJoinedCheck implements HazardCheck {
     public List<Hazard> check(StepContext ctx) {
         NetworkState s = ctx.after();
         int n = s.nodeCount();
-        int[] parent = new int[n];
-        for (int i = 0; i < n; i++) parent[i] = i;
         int m = s.edgeCount();
-        for (int e = 0; e < m; e++) {
-            if (StateWalk.passable(s, e)) union(parent, s.edgeFrom(e), s.edgeTo(e));
-        }
+        int[] parent = ctx.afterPieces();
         int[] sysOf = new int[n];
         int[] edgeOf = new int[n];
         java.util.Arrays.fill(sysOf, -1);
         Map<String, int[]> conflicts = new LinkedHashMap<>();
         for (int e = 0; e < m; e++) {
             if (s.edgeKind(e) != EdgeKind.PIPE || !s.pipeLive(e)) continue;
-            int r = find(parent, s.edgeFrom(e));
+            int r = parent[s.edgeFrom(e)];
             int sys = s.mainSystem(s.edgeFeature(e));
             if (sysOf[r] < 0) {
                 sysOf[r] = sys;
@@ -62,18 +58,5 @@ public final class SystemsJoinedCheck implements HazardCheck {
                     "Do not make this connection; join mains of one system only, or pass the gas through a regulator."));
         }
         return out;
-    }
-
-    private static int find(int[] p, int x) {
-        while (p[x] != x) {
-            p[x] = p[p[x]];
-            x = p[x];
-        }
-        return x;
-    }
-
-    private static void union(int[] p, int a, int b) {
-        int ra = find(p, a), rb = find(p, b);
-        if (ra != rb) p[Math.max(ra, rb)] = Math.min(ra, rb);
     }
 }

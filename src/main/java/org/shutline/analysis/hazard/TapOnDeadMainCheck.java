@@ -1,7 +1,6 @@
 package org.shutline.analysis.hazard;
 
 import java.util.ArrayList;
-import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.MainStatus;
 import org.shutline.model.Network;
@@ -36,7 +35,6 @@ public final class TapOnDeadMainCheck implements HazardCheck {
             int e = s.stationEdge(st);
             if (e < 0 || s.isRemoved(e) || !s.stationInService(st) || !tr.isLive(s.edgeFrom(e))) continue;
             Station station = net.stations().get(st);
-            BitSet fromOutlet = null;
             for (int t : ctx.tapsOf(station.id())) {
                 int te = s.tapEdge(t);
                 if (te < 0 || s.edgeKind(te) != EdgeKind.PIPE) continue;
@@ -46,8 +44,8 @@ public final class TapOnDeadMainCheck implements HazardCheck {
                 } else if (!tr.isEdgeLive(te)) {
                     why = "is on main " + s.mainId(s.edgeFeature(te)) + ", which is isolated (no gas) in this state";
                 } else {
-                    if (fromOutlet == null) fromOutlet = StateWalk.reach(s, s.edgeTo(e));
-                    if (!StateWalk.edgeReached(s, fromOutlet, te)) {
+                    int[] piece = ctx.afterPieces();
+                    if (!StateWalk.passable(s, te) || piece[s.edgeFrom(te)] != piece[s.edgeTo(e)]) {
                         why = "is on main " + s.mainId(s.edgeFeature(te)) + ", which is cut away from the station's outlet";
                     }
                 }
