@@ -51,6 +51,8 @@ public final class OutageTables {
     private final boolean[] valveRelied;
     private final int[] valveUnitA, valveUnitB;
     private final long[] unitServicesOff;
+    /** The dominator tree over super-source, units and station nodes (shared with {@link RiskTables}). */
+    private final Dominators dom;
 
     private OutageTables(ValveSegments segs, Progress progress, boolean localPairs) {
         this.segs = segs;
@@ -68,7 +70,7 @@ public final class OutageTables {
             met[1 + unitOf[s]] += segs.meters(s);
         }
         int[][] csr = arcs(sg, nodes);
-        Dominators dom = new Dominators(nodes, csr[0], csr[1]);
+        dom = new Dominators(nodes, csr[0], csr[1]);
         long[] subSvc = dom.subtreeSums(svc);
         long[] subMet = dom.subtreeSums(met);
         unitServicesOff = new long[units];
@@ -193,6 +195,8 @@ public final class OutageTables {
     }
 
     public ValveSegments segments() { return segs; }
+    /** The dominator tree: node 0 the super-source, 1..units the units, then one node per station. */
+    Dominators dominators() { return dom; }
     public int unitCount() { return units; }
     /** Isolation unit of a segment. */
     public int unitOf(int segment) { return unitOf[segment]; }

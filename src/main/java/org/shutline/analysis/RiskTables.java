@@ -1,7 +1,6 @@
 package org.shutline.analysis;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import org.locationtech.jts.geom.Geometry;
@@ -79,10 +78,8 @@ public final class RiskTables {
         SegmentGraph sg = segs.graph();
         NetworkState s = segs.state();
         int units = tables.unitCount();
-        int nst = s.stationCount();
-        int nodes = 1 + units + nst;
-        int[][] csr = arcs(sg, units, nodes);
-        Dominators dom = new Dominators(nodes, csr[0], csr[1]);
+        int nodes = 1 + units + s.stationCount();
+        Dominators dom = tables.dominators();
         long[] crit = new long[nodes];
         List<Service> services = s.network().services();
         for (int seg = 0; seg < segs.segmentCount(); seg++) {
@@ -206,39 +203,5 @@ public final class RiskTables {
             lines[i - st[seg]] = g instanceof LineString ls ? ls : GF.createLineString(g.getCoordinates());
         }
         return GF.createMultiLineString(lines);
-    }
-
-    /** Same graph as {@link OutageTables}: 0 super-source, 1..units, then one node per station. */
-    private int[][] arcs(SegmentGraph sg, int units, int nodes) {
-        int[] from = new int[sg.linkCount() * 2 + sg.sourceCount() + 1];
-        int[] to = new int[from.length];
-        int c = 0;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int s = sg.sourceSegment(i);
-            if (s < 0) continue;
-            from[c] = 0;
-            to[c++] = 1 + tables.unitOf(s);
-        }
-        for (int l = 0; l < sg.linkCount(); l++) {
-            if (!sg.isOpen(l)) continue;
-            int a = 1 + tables.unitOf(sg.linkA(l)), b = 1 + tables.unitOf(sg.linkB(l));
-            if (sg.isValve(l)) {
-                if (a == b) continue;
-                from[c] = a;
-                to[c++] = b;
-                from[c] = b;
-                to[c++] = a;
-            } else {
-                int x = 1 + units + sg.linkFeature(l);
-                from[c] = a;
-                to[c++] = x;
-                from[c] = x;
-                to[c++] = b;
-            }
-        }
-        int[][] g = Csr.group(Arrays.copyOf(from, c), nodes);
-        int[] succ = new int[c];
-        for (int i = 0; i < c; i++) succ[i] = to[g[1][i]];
-        return new int[][] {g[0], succ};
     }
 }

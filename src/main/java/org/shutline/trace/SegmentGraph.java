@@ -177,6 +177,20 @@ public final class SegmentGraph {
      * {@code blockedLinks} (may be null). O(segments + links).
      */
     public BitSet reachFromSources(BitSet blocked, BitSet blockedLinks) {
+        return reach(blocked, blockedLinks, null);
+    }
+
+    /**
+     * Segments reached from the source segments, gas flowing by {@link #canFlow}, never
+     * entering a segment in {@code blocked} (may be null) nor passing a station in
+     * {@code stoppedStations} (station indices; may be null). O(segments + links).
+     */
+    public BitSet reachFromSourcesStopping(BitSet blocked, BitSet stoppedStations) {
+        return reach(blocked, null, stoppedStations);
+    }
+
+    /** The breadth-first search behind both: links in {@code blockedLinks} and stations in {@code stoppedStations} are not crossed. */
+    private BitSet reach(BitSet blocked, BitSet blockedLinks, BitSet stoppedStations) {
         BitSet seen = new BitSet(segmentCount);
         int[] queue = new int[Math.max(1, segmentCount)];
         int head = 0, tail = 0;
@@ -191,35 +205,7 @@ public final class SegmentGraph {
             for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
                 int l = crossLink[i];
                 if (!canFlow(l, u) || (blockedLinks != null && blockedLinks.get(l))) continue;
-                int w = other(l, u);
-                if (seen.get(w) || (blocked != null && blocked.get(w))) continue;
-                seen.set(w);
-                queue[tail++] = w;
-            }
-        }
-        return seen;
-    }
-
-    /**
-     * Segments reached from the source segments, gas flowing by {@link #canFlow}, never
-     * entering a segment in {@code blocked} (may be null) nor passing a station in
-     * {@code stoppedStations} (station indices; may be null). O(segments + links).
-     */
-    public BitSet reachFromSourcesStopping(BitSet blocked, BitSet stoppedStations) {
-        BitSet seen = new BitSet(segmentCount);
-        int[] queue = new int[Math.max(1, segmentCount)];
-        int head = 0, tail = 0;
-        for (int seg : sourceSegment) {
-            if (seg >= 0 && !seen.get(seg) && (blocked == null || !blocked.get(seg))) {
-                seen.set(seg);
-                queue[tail++] = seg;
-            }
-        }
-        while (head < tail) {
-            int u = queue[head++];
-            for (int i = crossStart[u]; i < crossStart[u + 1]; i++) {
-                int l = crossLink[i];
-                if (!canFlow(l, u) || (stoppedStations != null && linkKind[l] == EdgeKind.STATION && stoppedStations.get(linkFeature[l]))) continue;
+                if (stoppedStations != null && linkKind[l] == EdgeKind.STATION && stoppedStations.get(linkFeature[l])) continue;
                 int w = other(l, u);
                 if (seen.get(w) || (blocked != null && blocked.get(w))) continue;
                 seen.set(w);
