@@ -94,9 +94,7 @@ public final class CardsCommand implements Callable<Integer> {
             Plan plan = PlanReader.read(planFile);
             ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
         } catch (InputException | PlanException | IllegalArgumentException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
         Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
@@ -115,9 +113,7 @@ public final class CardsCommand implements Callable<Integer> {
                 DocumentExport.pdf(sheets, pf, new DocumentExport.Info("Emergency cards: " + ps.plan().project(),
                         "Shut-off per phase", "Shutline"), out.resolve("emergency-cards.pdf"));
             } catch (IOException e) {
-                err.println("cards: cannot write " + out.resolve("emergency-cards.pdf") + ": " + e.getMessage());
-                err.flush();
-                return 2;
+                return NetworkInput.badInput(err, "cards: cannot write " + out.resolve("emergency-cards.pdf") + ": " + e.getMessage());
             }
         }
         o.print(format == Format.json ? Json.write(json(t.network(), ps, cards, grid, settings)) : text(t.network(), ps, cards, grid, settings));

@@ -1,15 +1,10 @@
 package org.shutline.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.shutline.io.FieldMapping;
 import org.shutline.io.InputException;
-import org.shutline.io.NetworkReader;
-import org.shutline.model.Network;
-import org.shutline.model.Tolerances;
-import org.shutline.topology.NetworkBuilder;
+import org.shutline.model.Progress;
 import org.shutline.topology.Topology;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -19,7 +14,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /**
  * {@code shutline check NETWORK [--mapping FILE] [--format text|json]}: reads the
- * network, builds its topology with the default tolerances and prints a
+ * network, builds its topology with the tolerances of the mapping file (else the defaults) and prints a
  * {@link CheckReport}. Exit 0 when there is no ERROR (or CRITICAL) finding, 1 when there
  * is, 2 when the input cannot be read (the message goes to stderr, no stack trace).
  */
@@ -45,27 +40,15 @@ public final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Network n;
+        Topology t;
         try {
-            n = read();
+            t = NetworkInput.load(network, mapping, Progress.NONE);
         } catch (InputException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
-        Topology t = NetworkBuilder.build(n, Tolerances.DEFAULT);
-        CheckReport r = CheckReport.of(n, t.findings());
+        CheckReport r = CheckReport.of(t.network(), t.findings());
         out.print(format == Format.json ? r.toJson() : r.toText());
         out.flush();
         return r.exitCode();
-    }
-
-    private Network read() throws InputException {
-        if (!Files.exists(network)) throw new InputException("cannot read " + network + ": no such file or folder");
-        if (mapping != null && !Files.isReadable(mapping)) {
-            throw new InputException("cannot read mapping file " + mapping + ": no such file or not readable");
-        }
-        FieldMapping m = mapping == null ? FieldMapping.DEFAULT : FieldMapping.load(mapping);
-        return NetworkReader.read(network, m);
     }
 }

@@ -119,7 +119,7 @@ public final class ExportCommand implements Callable<Integer> {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         String bad = checkOptions();
-        if (bad != null) return fail(err, bad);
+        if (bad != null) return NetworkInput.badInput(err, bad);
         ReportBuilder.Options opts = options();
         Isolation.Options iso = new Isolation.Options(asOf == null ? LocalDate.now() : asOf,
                 Period.ofMonths(inspectionMonths), true);
@@ -129,7 +129,7 @@ public final class ExportCommand implements Callable<Integer> {
                 PlanEvaluation.Result r = PlanCommand.evaluate(network, mapping, where.plan, null, iso.asOf(), inspectionMonths,
                         Progress.NONE);
                 if (step < 1 || step > r.steps().size()) {
-                    return fail(err, "export: the plan has steps 1 to " + r.steps().size() + ", not " + step);
+                    return NetworkInput.badInput(err, "export: the plan has steps 1 to " + r.steps().size() + ", not " + step);
                 }
                 rb = ReportBuilder.of(ReportView.ofStep(r, step, iso), network, opts).withPlan(r, where.plan);
             } else {
@@ -137,7 +137,7 @@ public final class ExportCommand implements Callable<Integer> {
                 rb = ReportBuilder.of(incident(t, iso), network, opts);
             }
         } catch (InputException | PlanException | IllegalArgumentException e) {
-            return fail(err, e.getMessage());
+            return NetworkInput.badInput(err, e.getMessage());
         }
         try {
             List<Path> files = rb.write(out, Progress.NONE);
@@ -146,7 +146,7 @@ public final class ExportCommand implements Callable<Integer> {
             o.flush();
             return 0;
         } catch (IOException e) {
-            return fail(err, "export: " + e.getMessage());
+            return NetworkInput.badInput(err, "export: " + e.getMessage());
         }
     }
 
@@ -197,8 +197,6 @@ public final class ExportCommand implements Callable<Integer> {
     }
 
     private static int fail(PrintWriter err, String message) {
-        err.println(message);
-        err.flush();
-        return 2;
+        return NetworkInput.badInput(err, message);
     }
 }

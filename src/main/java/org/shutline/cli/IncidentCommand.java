@@ -115,13 +115,13 @@ public final class IncidentCommand implements Callable<Integer> {
             settings = new ResponseSettings(ResponseRates.DEFAULT, new ValveRoute.Settings(valveMinutes, speed, detour), crews,
                     targetHours, relightHours);
         } catch (IllegalArgumentException e) {
-            return fail(err, e.getMessage());
+            return NetworkInput.badInput(err, e.getMessage());
         }
         Topology t;
         try {
             t = NetworkInput.load(network, mapping, Progress.NONE);
         } catch (InputException e) {
-            return fail(err, e.getMessage());
+            return NetworkInput.badInput(err, e.getMessage());
         }
         Network net = t.network();
         GridSheets grid = GridSheets.of(net.crs());
@@ -130,7 +130,7 @@ public final class IncidentCommand implements Callable<Integer> {
         try {
             place = place(net, segs, grid, err);
         } catch (IllegalArgumentException e) {
-            return fail(err, e.getMessage());
+            return NetworkInput.badInput(err, e.getMessage());
         }
         if (place == null) return 2;
         Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
@@ -156,7 +156,7 @@ public final class IncidentCommand implements Callable<Integer> {
         if (kind == Kind.overpressure) {
             String sys = system != null ? system : IncidentResponse.systemOf(segs, place.zone());
             if (sys == null || t.graph().systemIndex(sys) < 0) {
-                return fail(err, "incident: " + (sys == null ? "no pressure system at the place given" : "no pressure system '" + sys + "'"));
+                return NetworkInput.badInput(err, "incident: " + (sys == null ? "no pressure system at the place given" : "no pressure system '" + sys + "'"));
             }
             OverpressureShutoff.Result r = OverpressureShutoff.of(segs, options, sys, settings);
             EmergencyReport.overpressureJson(root, net, r);
@@ -223,8 +223,6 @@ public final class IncidentCommand implements Callable<Integer> {
     }
 
     private static int fail(PrintWriter err, String message) {
-        err.println(message);
-        err.flush();
-        return 2;
+        return NetworkInput.badInput(err, message);
     }
 }

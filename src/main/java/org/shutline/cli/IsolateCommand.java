@@ -71,19 +71,13 @@ public final class IsolateCommand implements Callable<Integer> {
         try {
             t = NetworkInput.load(network, mapping, Progress.NONE);
         } catch (InputException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
         if (where.at != null && where.at.length != 2) {
-            err.println("isolate: --at takes X,Y");
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, "isolate: --at takes X,Y");
         }
         if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
-            err.println("isolate: no main with id '" + where.main + "' in " + network);
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, "isolate: no main with id '" + where.main + "' in " + network);
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
@@ -92,9 +86,7 @@ public final class IsolateCommand implements Callable<Integer> {
         try {
             r = iso.isolate(zone);
         } catch (IllegalArgumentException e) {
-            err.println("isolate: " + e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
         out.print(format == Format.json ? Json.write(json(t.network(), r)) : text(t.network(), r));
         out.flush();

@@ -15,6 +15,13 @@ import org.shutline.topology.Topology;
 final class NetworkInput {
     private NetworkInput() {}
 
+    /** Reports a user's input problem on stderr (message only, no stack trace) and gives exit code 2. */
+    static int badInput(java.io.PrintWriter err, String message) {
+        err.println(message);
+        err.flush();
+        return 2;
+    }
+
     static Topology load(Path network, Path mapping, Progress progress) throws InputException {
         if (!Files.exists(network)) throw new InputException("cannot read " + network + ": no such file or folder");
         if (mapping != null && !Files.isReadable(mapping)) {

@@ -84,9 +84,7 @@ public final class PlanCommand implements Callable<Integer> {
         try {
             r = evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, Progress.NONE);
         } catch (InputException | PlanException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
         String text = switch (format) {
             case json -> Json.write(json(r));
@@ -101,9 +99,7 @@ public final class PlanCommand implements Callable<Integer> {
                 AtomicFiles.writeString(out.resolve("plan-hazards.csv"), hazardsCsv(r));
                 AtomicFiles.writeString(out.resolve("plan.json"), Json.write(json(r)));
             } catch (IOException e) {
-                err.println("plan: cannot write to " + out + ": " + e.getMessage());
-                err.flush();
-                return 2;
+                return NetworkInput.badInput(err, "plan: cannot write to " + out + ": " + e.getMessage());
             }
         }
         return r.hasCritical() ? 1 : 0;

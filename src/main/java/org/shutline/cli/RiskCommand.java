@@ -67,9 +67,7 @@ public final class RiskCommand implements Callable<Integer> {
         try {
             t = NetworkInput.load(network, mapping, Progress.NONE);
         } catch (InputException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
         long t1 = System.nanoTime();
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
@@ -82,9 +80,7 @@ public final class RiskCommand implements Callable<Integer> {
             GeoPackageWriter.write(out.resolve("risk-segments.gpkg"), t.network().crs(), List.of(layer(tables)), Progress.NONE);
             if (!noMap) RiskMap.write(t.network(), tables, 1600, 1240, out.resolve("risk-map.png"));
         } catch (IOException e) {
-            err.println("risk: cannot write to " + out + ": " + e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, "risk: cannot write to " + out + ": " + e.getMessage());
         }
         long t3 = System.nanoTime();
         o.print(summary(t.network(), segs, tables));

@@ -59,9 +59,7 @@ public final class TraceCommand implements Callable<Integer> {
         try {
             t = NetworkInput.load(network, mapping, Progress.NONE);
         } catch (InputException e) {
-            err.println(e.getMessage());
-            err.flush();
-            return 2;
+            return NetworkInput.badInput(err, e.getMessage());
         }
         Network net = t.network();
         NetworkState base = NetworkState.of(t);
@@ -69,9 +67,7 @@ public final class TraceCommand implements Callable<Integer> {
         for (String id : close) {
             int v = valveIndex(net, id);
             if (v < 0) {
-                err.println("trace: no valve with id '" + id + "' in " + network);
-                err.flush();
-                return 2;
+                return NetworkInput.badInput(err, "trace: no valve with id '" + id + "' in " + network);
             }
             state = state.withValveClosed(v, true);
         }
