@@ -25,6 +25,7 @@ import org.shutline.plan.Step;
 import org.shutline.plan.StepState;
 import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
+import org.shutline.trace.ValveSegments;
 
 /**
  * Evaluates every step of an applied plan: services and meters off gas against the
@@ -132,19 +133,23 @@ public final class PlanEvaluation {
         NetworkState base = ps.base();
         Network net = base.network();
         progress.begin("evaluate plan", ps.steps().size() + 1L);
-        FeedTrace.Result baseTrace = FeedTrace.run(base);
+        // each state's valve segments are built once: for its trace, its rules, and the next step's suggestion
+        ValveSegments baseSegs = ValveSegments.build(base);
+        FeedTrace.Result baseTrace = FeedTrace.run(baseSegs, Progress.NONE);
         BitSet baseFed = baseTrace.fedServices();
         BitSet baseLive = baseTrace.liveEdges();
-        List<Hazard> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, settings));
+        List<Hazard> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, baseSegs, settings));
         Set<String> active = keys(recorded);
         FeedTrace.Result prevTrace = baseTrace;
+        ValveSegments prevSegs = baseSegs;
         BitSet prevOff = new BitSet();
         double buffer = net.crs().unit().fromMetres(bufferM);
         List<StepResult> out = new ArrayList<>();
         for (StepState st : ps.steps()) {
             progress.checkCancelled();
-            FeedTrace.Result tr = FeedTrace.run(st.after());
-            StepContext ctx = new StepContext(st, base, baseTrace, prevTrace, tr, settings);
+            ValveSegments segs = ValveSegments.build(st.after());
+            FeedTrace.Result tr = FeedTrace.run(segs, Progress.NONE);
+            StepContext ctx = new StepContext(st, base, baseTrace, prevTrace, tr, segs, settings);
             List<Hazard> all = run(checks, ctx);
             List<Hazard> fresh = new ArrayList<>();
             List<Hazard> cont = new ArrayList<>();
@@ -152,7 +157,7 @@ public final class PlanEvaluation {
             active = keys(all);
             BitSet off = (BitSet) baseFed.clone();
             off.andNot(tr.fedServices());
-            Suggestion sug = Suggestions.forStep(st, settings);
+            Suggestion sug = Suggestions.forStep(st, prevSegs, settings);
             Lazy<Geometry> extent;
             if (!out.isEmpty() && off.equals(prevOff) && tr.liveEdges().equals(prevTrace.liveEdges())) {
                 extent = out.get(out.size() - 1).gasOffExtent();
@@ -165,6 +170,7 @@ public final class PlanEvaluation {
             out.add(result(st, net, off, prevOff, tr, fresh, cont, extent, sug));
             prevOff = off;
             prevTrace = tr;
+            prevSegs = segs;
             progress.done(out.size() + 1L);
         }
         return new Result(ps, recorded, out, phases(ps, out));

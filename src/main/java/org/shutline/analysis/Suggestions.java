@@ -24,10 +24,11 @@ import org.shutline.trace.ValveSegments;
 final class Suggestions {
     private Suggestions() {}
 
-    static PlanEvaluation.Suggestion forStep(StepState st, StepContext.Settings settings) {
+    /** {@code beforeSegments}: the valve segments of the state before the step. */
+    static PlanEvaluation.Suggestion forStep(StepState st, ValveSegments beforeSegments, StepContext.Settings settings) {
         if (!(st.step().action() instanceof StepAction.CloseValves cv) || cv.ordered()) return null;
         NetworkState s = st.before();
-        ValveSegments segs = ValveSegments.build(s);
+        ValveSegments segs = beforeSegments;
         SegmentGraph sg = segs.graph();
         int[] hops = hops(sg);
         List<Integer> valves = new ArrayList<>();

@@ -127,6 +127,11 @@ public final class FeedTrace {
         return StationAttribution.run(s, progress);
     }
 
+    /** The same as {@link #run(NetworkState, Progress)} on valve segments already built for the state. */
+    public static Result run(ValveSegments segments, Progress progress) {
+        return StationAttribution.run(segments, progress);
+    }
+
     /**
      * The same result by two searches of the whole node graph per live station (the
      * plain method, O(stations x (nodes + edges))); kept as the reference the tests

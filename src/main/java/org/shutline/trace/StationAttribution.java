@@ -29,8 +29,13 @@ final class StationAttribution {
     private StationAttribution() {}
 
     static FeedTrace.Result run(NetworkState s, Progress progress) {
+        return run(ValveSegments.build(s), progress);
+    }
+
+    /** On valve segments already built for the state. */
+    static FeedTrace.Result run(ValveSegments vs, Progress progress) {
+        NetworkState s = vs.state();
         progress.begin("feed trace", s.stationCount() * 2L + 2);
-        ValveSegments vs = ValveSegments.build(s);
         SegmentGraph sg = vs.graph();
         int nseg = vs.segmentCount();
         progress.done(1);

@@ -40,6 +40,13 @@ public final class StepContext {
 
     public StepContext(StepState step, NetworkState base, FeedTrace.Result baseTrace, FeedTrace.Result beforeTrace,
                        FeedTrace.Result afterTrace, Settings settings) {
+        this(step, base, baseTrace, beforeTrace, afterTrace, null, settings);
+    }
+
+    /** With the valve segments of the state after the step already built (may be null). */
+    public StepContext(StepState step, NetworkState base, FeedTrace.Result baseTrace, FeedTrace.Result beforeTrace,
+                       FeedTrace.Result afterTrace, ValveSegments afterSegments, Settings settings) {
+        this.afterSegments = afterSegments;
         this.step = step;
         this.base = base;
         this.before = step == null ? base : step.before();
