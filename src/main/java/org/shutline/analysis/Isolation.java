@@ -8,13 +8,8 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
-import org.locationtech.jts.geom.Point;
-import org.shutline.model.Network;
 import org.shutline.model.Operability;
 import org.shutline.model.Service;
-import org.shutline.model.Station;
-import org.shutline.model.Valve;
-import org.shutline.model.ValveKind;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.SegmentGraph;
 import org.shutline.trace.ValveSegments;
@@ -29,9 +24,9 @@ import org.shutline.trace.ValveSegments;
  * <li>A source in the region, or an in-service station whose outlet is in the region and
  *     whose inlet segment is fed, means valves alone cannot isolate it:
  *     {@code isolable = false} with the reason; such stations are named with their
- *     inlet-side valves (kind {@code station}, on the station's inlet system, within the
- *     point tolerance of the station). The outcome is then computed as if those stations
- *     were stopped and those sources shut.</li>
+ *     {@link StationStop} (the valves that leave the station's inlet dead, verified on
+ *     the segment graph, never found by nearness alone). The outcome is then computed
+ *     as if those stations were stopped and those sources shut.</li>
  * <li>After: gas flows from the sources over the segment graph never entering the
  *     region. An open valve on the region's boundary is listed only if its far side is
  *     still fed after; the others lead to segments that lose every source
@@ -56,8 +51,8 @@ import org.shutline.trace.ValveSegments;
  * listed valve. Services enter only at the end: services off, and those a fallback or
  * the alternative adds, are read from the per-segment service lists of the segments
  * off (every service lies in one segment), meters from the per-segment sums, so the
- * service work is proportional to the services reported. A station's inlet valves
- * are found once per station and reused. Searches and boundary scans use only links
+ * service work is proportional to the services reported. A station's stop is found
+ * once per station and reused. Searches and boundary scans use only links
  * between two different segments ({@link SegmentGraph#crossStart}); the cores of
  * fallbacks and alternatives grow from the added segment only and find their listed
  * valves from the smaller side (region boundary or segments still fed). The result's
@@ -86,20 +81,40 @@ public final class Isolation {
     public record ValveStep(int order, String valveId, int valve, Operability operable, boolean overdue, int hops) {}
 
     /** What to do if valve {@code valveId} fails to close. */
+    /**
+     * What to do if valve {@code valveId} fails to close. When not {@code isolable},
+     * {@code stationsToStop} and {@code sourcesInRegion} name what must be stopped or shut
+     * besides the valves (the outcome is computed as if they were).
+     */
     public record Fallback(String valveId, String why, boolean isolable, List<String> valves, List<String> thenClose,
-                           List<String> addedServices, long addedMeters) {
+                           List<String> addedServices, long addedMeters, List<String> stationsToStop, List<String> sourcesInRegion) {
         public Fallback {
             valves = List.copyOf(valves);
             thenClose = List.copyOf(thenClose);
             addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
+            stationsToStop = List.copyOf(stationsToStop);
+            sourcesInRegion = List.copyOf(sourcesInRegion);
+        }
+
+        /** A fallback that valves alone achieve (nothing to stop or shut besides). */
+        public Fallback(String valveId, String why, boolean isolable, List<String> valves, List<String> thenClose,
+                        List<String> addedServices, long addedMeters) {
+            this(valveId, why, isolable, valves, thenClose, addedServices, addedMeters, List.of(), List.of());
         }
     }
 
     /** A smaller valve set at the cost of more services off. */
-    public record Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
+    public record Alternative(List<String> valves, List<String> addedServices, long addedMeters, List<String> stationsToStop,
+                              List<String> sourcesInRegion) {
         public Alternative {
             valves = List.copyOf(valves);
             addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
+            stationsToStop = List.copyOf(stationsToStop);
+            sourcesInRegion = List.copyOf(sourcesInRegion);
+        }
+
+        public Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
+            this(valves, addedServices, addedMeters, List.of(), List.of());
         }
     }
 
@@ -108,8 +123,9 @@ public final class Isolation {
                          List<ValveStep> valves, List<String> closedBoundaryValves, List<String> unlistedValves,
                          List<String> sourcesInRegion, List<String> stationsToStop, List<String> stationInletValves,
                          BitSet servicesOff, List<String> serviceIdsOff, long metersOff, List<String> criticalOff,
-                         List<Fallback> fallbacks, Optional<Alternative> alternative) {
+                         List<Fallback> fallbacks, Optional<Alternative> alternative, List<StationStop.Result> stationStops) {
         public Result {
+            stationStops = List.copyOf(stationStops);
             zoneSegments = (BitSet) zoneSegments.clone();
             region = (BitSet) region.clone();
             unintended = (BitSet) unintended.clone();
@@ -123,6 +139,16 @@ public final class Isolation {
             serviceIdsOff = serviceIdsOff instanceof ServiceIdList ? serviceIdsOff : List.copyOf(serviceIdsOff);
             criticalOff = List.copyOf(criticalOff);
             fallbacks = List.copyOf(fallbacks);
+        }
+
+        /** Without station stops (a result whose stations, if any, are named without their stop). */
+        public Result(boolean isolable, String reason, BitSet zoneSegments, BitSet region, BitSet unintended,
+                      List<ValveStep> valves, List<String> closedBoundaryValves, List<String> unlistedValves,
+                      List<String> sourcesInRegion, List<String> stationsToStop, List<String> stationInletValves,
+                      BitSet servicesOff, List<String> serviceIdsOff, long metersOff, List<String> criticalOff,
+                      List<Fallback> fallbacks, Optional<Alternative> alternative) {
+            this(isolable, reason, zoneSegments, region, unintended, valves, closedBoundaryValves, unlistedValves, sourcesInRegion,
+                    stationsToStop, stationInletValves, servicesOff, serviceIdsOff, metersOff, criticalOff, fallbacks, alternative, List.of());
         }
 
         @Override public BitSet zoneSegments() { return (BitSet) zoneSegments.clone(); }
@@ -149,9 +175,8 @@ public final class Isolation {
     private final BitSet critical;
     /** Services that lie in a segment (on active pipe). */
     private final BitSet inSegment;
-    /** Inlet valves per station, found on first use (a scan of all valves), then reused. */
-    private final java.util.concurrent.atomic.AtomicReferenceArray<List<String>> inletValvesCache;
-    private volatile int[] stationKindValves;
+    /** Station stops, found on first use, then reused. */
+    private final java.util.concurrent.atomic.AtomicReferenceArray<StationStop.Result> stopCache;
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
@@ -176,7 +201,7 @@ public final class Isolation {
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
         this.inSegment = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
-        this.inletValvesCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
+        this.stopCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
     /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
@@ -209,7 +234,8 @@ public final class Isolation {
                         || (grown.listed.size() == alt.valves().size()
                             && addedCount(core, grown) < alt.addedServices().size()))) {
                 BitSet addedSegs = addedSegments(core, grown);
-                alt = new Alternative(ordered(grown), ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
+                alt = new Alternative(ordered(grown), ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs),
+                        stationIds(grown.stations), grown.sources);
             }
         }
         return result(zoneSegs, core, fallbacks, alt);
@@ -443,7 +469,8 @@ public final class Isolation {
         for (String id : all) if (!before.contains(id)) then.add(id);
         BitSet addedSegs = addedSegments(core, grown);
         boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
-        return new Fallback(state.valveId(v), why, isolable, all, then, ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs));
+        return new Fallback(state.valveId(v), why, isolable, all, then, ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs),
+                stationIds(grown.stations), grown.sources);
     }
 
     /**
@@ -496,11 +523,20 @@ public final class Isolation {
 
 
     private Result result(BitSet zoneSegs, Core c, List<Fallback> fallbacks, Alternative alt) {
-        List<String> stationIds = new ArrayList<>();
+        List<String> stationIds = stationIds(c.stations);
         List<String> inletValves = new ArrayList<>();
+        List<StationStop.Result> stops = new ArrayList<>();
+        List<String> stopTexts = new ArrayList<>();
         for (int st : c.stations) {
-            stationIds.add(state.stationId(st));
-            inletValves.addAll(inletValves(st));
+            StationStop.Result stop = stationStop(st);
+            if (stop == null) {
+                stopTexts.add(state.stationId(st));
+                continue;
+            }
+            stops.add(stop);
+            for (String v : stop.valves()) if (!inletValves.contains(v)) inletValves.add(v);
+            stopTexts.add(state.stationId(st) + (stop.valves().isEmpty() ? " (" + stop.note() + ")"
+                    : " (close " + String.join(", ", stop.valves()) + ")"));
         }
         StringBuilder reason = new StringBuilder();
         if (zoneSegs.isEmpty()) reason.append("the zone touches no active pipe");
@@ -511,10 +547,8 @@ public final class Isolation {
         }
         if (!c.stations.isEmpty()) {
             reason.append(reason.length() > 0 ? "; " : "")
-                    .append("station ").append(String.join(", ", stationIds))
-                    .append(" feeds the region directly: stop it")
-                    .append(inletValves.isEmpty() ? "" : " (inlet valves " + String.join(", ", inletValves) + ")")
-                    .append(", valves alone cannot isolate it");
+                    .append("valves alone cannot isolate: station ").append(String.join(", ", stationIds))
+                    .append(" feeds the region directly: stop station ").append(String.join("; stop station ", stopTexts));
         }
         BitSet unintended = (BitSet) c.off.clone();
         unintended.andNot(c.region);
@@ -524,48 +558,38 @@ public final class Isolation {
         boolean isolable = reason.length() == 0;
         return new Result(isolable, reason.toString(), zoneSegs, c.region, unintended, steps(c), valveIds(c.closedBounds, c.closedCount),
                 valveIds(c.unlisted, c.unlistedCount), c.sources, stationIds, inletValves, offServices, ServiceIdList.owning(state.network().services(), offServices),
-                metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt));
+                metersOf(c.off), ids(criticalOff), fallbacks, Optional.ofNullable(alt), stops);
     }
 
-    /** Valves of kind station on the station's inlet system within the point tolerance of it. */
-    private List<String> inletValves(int st) {
-        List<String> cached = inletValvesCache.get(st);
-        if (cached == null) {
-            cached = List.copyOf(findInletValves(st));
-            inletValvesCache.compareAndSet(st, null, cached);
-        }
-        return cached;
-    }
-
-    /** Indices of the valves of kind station, in index order (one scan of the valves, on first use). */
-    private int[] stationKindValves() {
-        int[] a = stationKindValves;
-        if (a == null) {
-            List<Valve> vs = state.network().valves();
-            int c = 0;
-            a = new int[16];
-            for (int i = 0; i < vs.size(); i++) {
-                if (vs.get(i).kind() != ValveKind.STATION) continue;
-                if (c == a.length) a = java.util.Arrays.copyOf(a, c * 2);
-                a[c++] = i;
-            }
-            a = java.util.Arrays.copyOf(a, c);
-            stationKindValves = a;
-        }
-        return a;
-    }
-
-    private List<String> findInletValves(int st) {
-        Network net = state.network();
-        Station station = net.stations().get(st);
-        double tol = state.topology().tolerances().pointM();
-        List<String> out = new ArrayList<>();
-        Point at = station.geometry();
-        for (int i : stationKindValves()) {
-            Valve v = net.valves().get(i);
-            if (!Objects.equals(v.systemId(), station.inSys())) continue;
-            if (at != null && v.geometry() != null && v.geometry().distance(at) <= tol) out.add(v.id());
-        }
+    private List<String> stationIds(List<Integer> stations) {
+        List<String> out = new ArrayList<>(stations.size());
+        for (int st : stations) out.add(state.stationId(st));
         return out;
     }
+
+    /**
+     * The verified-by-construction stop of a station in this state ({@link StationStop}),
+     * found on first use and reused; null while that station's own stop is being
+     * computed on this thread (a cascade that leads back to it).
+     */
+    public StationStop.Result stationStop(int st) {
+        StationStop.Result cached = stopCache.get(st);
+        if (cached != null) return cached;
+        BitSet busy = STOPPING.get();
+        if (busy.get(st)) return null;
+        busy.set(st);
+        try {
+            cached = StationStop.compute(this, st);
+        } finally {
+            busy.clear(st);
+        }
+        stopCache.compareAndSet(st, null, cached);
+        return stopCache.get(st);
+    }
+
+    private static final ThreadLocal<BitSet> STOPPING = ThreadLocal.withInitial(BitSet::new);
+
+    ValveSegments segments() { return segs; }
+
+    Options options() { return options; }
 }

@@ -3,13 +3,9 @@ package org.shutline.analysis;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
-import java.util.Objects;
-import org.locationtech.jts.geom.Point;
 import org.shutline.model.Network;
 import org.shutline.model.Service;
 import org.shutline.model.Station;
-import org.shutline.model.Valve;
-import org.shutline.model.ValveKind;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.SegmentGraph;
 import org.shutline.trace.ValveSegments;
@@ -20,29 +16,34 @@ import org.shutline.trace.ValveSegments;
  *
  * <ul>
  * <li>Feeds: every in-service station whose outlet segment is on the system and whose
- *     inlet segment is fed (the one-way link that brings gas in), with its inlet valves
- *     (kind {@code station}, on the station's inlet system, within the point tolerance
- *     of the station: the rule {@link Isolation} uses) and, as the upstream fallback
- *     when an inlet valve will not close or there is none, the {@link Isolation} of the
- *     station's inlet segment grown across its inlet valves (as if they will not close:
- *     the valves beyond them, their own fallbacks, what it adds); and every
- *     source on the system's pipe (the supply must be shut there).</li>
+ *     inlet segment is fed (the one-way link that brings gas in), with its
+ *     {@link StationStop}: the valves that leave its inlet dead (its own station valves
+ *     when they do, else the isolation of its inlet segment), with operating order, a
+ *     fallback per doubtful valve, the other stations stopped with it and the other
+ *     customers it puts off; and every source on the system's pipe (the supply must be
+ *     shut there).</li>
  * <li>At risk: every service on the system's pipe fed in the state (the normal state
  *     when given the base state), critical customers first; every one of them is to be
  *     checked for damage (meter, regulator, appliances) before relight.</li>
- * <li>Off after the shut-off: with no gas entering the system, the system is dead, and
- *     so is every district fed only through it: services fed before and not after, by
- *     one traversal of the segment graph with the system's segments blocked.</li>
+ * <li>Off after the shut-off: what doing it puts off gas: the services fed before and
+ *     not after one traversal of the segment graph with every stop's valves closed,
+ *     the stations a stop could not cut off by valves stopped, and the system's sources
+ *     (and sources a stop must shut) shut. The system is then dead, and so is every
+ *     district fed only through it or through the stopped inlets.</li>
  * <li>Work: {@link Restoration} over the services off (the dead districts purged and
  *     relit whole).</li>
  * </ul>
  * An unknown system id gives a result with no feeds and nobody at risk. Cost O(segments
- * + links + services) plus one isolation per feeding station.
+ * + links + services) plus one station stop per feeding station.
  */
 public final class OverpressureShutoff {
-    /** One way gas enters the system: a station ({@code upstream} non-null) or a source ({@code upstream} null). */
+    /**
+     * One way gas enters the system: a station ({@code stop} non-null) or a source
+     * ({@code stop} and {@code upstream} null). {@code inletValves} are the stop's valves
+     * (operating order) and {@code upstream} the stop's isolation (with its fallbacks).
+     */
     public record Feed(String kind, String id, String name, String fromSystem, List<String> inletValves,
-                       Isolation.Result upstream) {
+                       Isolation.Result upstream, StationStop.Result stop) {
         public Feed {
             inletValves = List.copyOf(inletValves);
         }
@@ -81,26 +82,36 @@ public final class OverpressureShutoff {
         BitSet before = iso.fedSegments();
         List<Feed> feeds = new ArrayList<>();
         Network net = s.network();
+        BitSet closedLinks = new BitSet(sg.linkCount());
+        BitSet stopped = new BitSet(s.stationCount());
+        BitSet shutSources = new BitSet(sg.sourceCount());
         for (int st = 0; st < s.stationCount(); st++) {
             int l = sg.stationLink(st);
             if (l < 0 || !sg.isOpen(l) || !onSystem.get(sg.linkB(l)) || onSystem.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
             Station station = net.stations().get(st);
-            List<String> inlet = inletValves(s, station);
-            Isolation.Result up = iso.isolate(new Zone.OfSegments(upstreamSeed(s, sg, sg.linkA(l), inlet)));
-            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), inlet, up));
+            StationStop.Result stop = iso.stationStop(st);
+            Isolation.Result up = stop.isolation();
+            for (Isolation.ValveStep v : up.valves()) closedLinks.set(sg.valveLink(v.valve()));
+            if (!up.isolable()) {
+                stopped.set(st);
+                for (String id : up.stationsToStop()) stopped.set(stationIndex(s, id));
+                for (String id : up.sourcesInRegion()) shutSources.set(sourceIndex(net, id));
+            }
+            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), stop.valves(), up, stop));
         }
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && onSystem.get(seg)) {
                 var src = net.sources().get(i);
-                feeds.add(new Feed("source", src.id(), src.id(), src.systemId(), List.of(), null));
+                feeds.add(new Feed("source", src.id(), src.id(), src.systemId(), List.of(), null, null));
+                shutSources.set(i);
             }
         }
         BitSet atRisk = new BitSet(s.serviceCount());
         for (int seg = onSystem.nextSetBit(0); seg >= 0; seg = onSystem.nextSetBit(seg + 1)) {
             if (before.get(seg)) for (int sv : segs.services(seg)) atRisk.set(sv);
         }
-        BitSet after = sg.reachFromSources(onSystem, null);
+        BitSet after = reach(sg, closedLinks, stopped, shutSources);
         BitSet lost = (BitSet) before.clone();
         lost.andNot(after);
         BitSet off = new BitSet(s.serviceCount());
@@ -115,28 +126,50 @@ public final class OverpressureShutoff {
                 Restoration.meters(all, off), r);
     }
 
-    /** The station's inlet segment and both sides of each of its inlet valves (the region if they will not close). */
-    private static int[] upstreamSeed(NetworkState s, SegmentGraph sg, int inletSegment, List<String> inletValves) {
-        BitSet seed = new BitSet(sg.segmentCount());
-        seed.set(inletSegment);
-        for (int v = 0; v < s.valveCount(); v++) {
-            int l = sg.valveLink(v);
-            if (l < 0 || !inletValves.contains(s.valveId(v))) continue;
-            seed.set(sg.linkA(l));
-            seed.set(sg.linkB(l));
+    /** Segments reached from the sources not shut, never crossing a closed link nor a stopped station. */
+    private static BitSet reach(SegmentGraph sg, BitSet closedLinks, BitSet stopped, BitSet shutSources) {
+        BitSet seen = new BitSet(sg.segmentCount());
+        int[] queue = new int[Math.max(1, sg.segmentCount())];
+        int head = 0, tail = 0;
+        for (int i = 0; i < sg.sourceCount(); i++) {
+            int seg = sg.sourceSegment(i);
+            if (seg >= 0 && !shutSources.get(i) && !seen.get(seg)) {
+                seen.set(seg);
+                queue[tail++] = seg;
+            }
         }
-        return seed.stream().toArray();
+        while (head < tail) {
+            int u = queue[head++];
+            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
+                int l = sg.crossLink(i);
+                if (!sg.canFlow(l, u) || closedLinks.get(l)) continue;
+                if (!sg.isValve(l) && stopped.get(sg.linkFeature(l))) continue;
+                int w = sg.other(l, u);
+                if (!seen.get(w)) {
+                    seen.set(w);
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return seen;
     }
 
-    /** Valves of kind station on the station's inlet system within the point tolerance of it (as {@link Isolation}). */
-    static List<String> inletValves(NetworkState state, Station station) {
-        double tol = state.topology().tolerances().pointM();
-        List<String> out = new ArrayList<>();
-        Point at = station.geometry();
-        for (Valve v : state.network().valves()) {
-            if (v.kind() != ValveKind.STATION || !Objects.equals(v.systemId(), station.inSys())) continue;
-            if (at != null && v.geometry() != null && v.geometry().distance(at) <= tol) out.add(v.id());
-        }
-        return out;
+    private static int stationIndex(NetworkState s, String id) {
+        for (int st = 0; st < s.stationCount(); st++) if (s.stationId(st).equals(id)) return st;
+        throw new IllegalStateException("no station " + id);
+    }
+
+    private static int sourceIndex(Network net, String id) {
+        for (int i = 0; i < net.sources().size(); i++) if (net.sources().get(i).id().equals(id)) return i;
+        throw new IllegalStateException("no source " + id);
+    }
+
+    /**
+     * The station's verified stop valves in this state (see {@link StationStop}); empty
+     * when it passes no gas already or valves alone cannot stop it.
+     */
+    static List<String> inletValves(ValveSegments segs, Isolation.Options options, int station) {
+        StationStop.Result r = new Isolation(segs, options).stationStop(station);
+        return r.stoppable() ? r.valves() : List.of();
     }
 }

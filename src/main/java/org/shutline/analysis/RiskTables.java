@@ -33,6 +33,7 @@ import org.shutline.trace.ValveSegments;
  *     in-service station with a fed inlet feeds straight into it;</li>
  * <li>critical customers off: dominator-subtree sums of the critical count.</li>
  * </ul>
+ * Stations carry their verified stop ({@link StationStop}).
  * Valves to fix: every relied-on valve v, with growth = max(off(A+B) - off(A),
  * off(A+B) - off(B)) for its two sides' units A and B ({@link OutageTables#growthFromSideA}),
  * ranked by growth, then services off when it fails, then id.
@@ -51,9 +52,14 @@ public final class RiskTables {
         }
     }
 
-    /** One station's row: what its outage puts off, and its inlet valves. */
+    /**
+     * One station's row: what its outage puts off, and the valves that stop it
+     * ({@code inletValves}: its verified {@link StationStop}, operating order; empty when
+     * valves alone cannot stop it or it passes no gas already) with the stop's note and
+     * the services the stop puts off besides the station's own district.
+     */
     public record StationRow(String stationId, String name, String inSys, String outSys, boolean inService, long servicesOff,
-                             long metersOff, long criticalOff, List<String> inletValves) {
+                             long metersOff, long criticalOff, List<String> inletValves, String stopNote, long stopOtherOff) {
         public StationRow {
             inletValves = List.copyOf(inletValves);
         }
@@ -145,12 +151,15 @@ public final class RiskTables {
     private List<StationRow> stationRows(NetworkState s, Dominators dom, long[] subCrit, int units) {
         List<StationRow> rows = new ArrayList<>();
         Network net = s.network();
+        // only the stop valves are read: they do not depend on the inspection date
+        Isolation iso = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
         for (int st = 0; st < s.stationCount(); st++) {
             Station station = net.stations().get(st);
             int x = 1 + units + st;
+            StationStop.Result stop = iso.stationStop(st);
             rows.add(new StationRow(station.id(), station.name(), station.inSys(), station.outSys(), s.stationInService(st),
                     tables.servicesOffWhenStationOut(st), tables.metersOffWhenStationOut(st), dom.isReachable(x) ? subCrit[x] : 0,
-                    OverpressureShutoff.inletValves(s, station)));
+                    stop.stoppable() ? stop.valves() : List.of(), stop.summary(), stop.otherOff().cardinality()));
         }
         rows.sort(Comparator.comparingLong(StationRow::servicesOff).reversed().thenComparing(StationRow::stationId));
         return rows;

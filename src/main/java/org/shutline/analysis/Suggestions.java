@@ -19,7 +19,8 @@ import org.shutline.trace.ValveSegments;
  * each valve; ties by valve id. For each listed valve that is unknown or past its
  * inspection interval, the fallback: the segments the step cuts off, grown across that
  * valve to its far side, isolated again with {@link Isolation}; its extra valves and
- * the services this adds.
+ * the services this adds. The suggestion is checked by {@link InstructionCheck} before
+ * it is returned (a mismatch throws {@link UnverifiedInstructionException}).
  */
 final class Suggestions {
     private Suggestions() {}
@@ -72,10 +73,13 @@ final class Suggestions {
                     meters += s.network().services().get(i).meters();
                 }
                 String why = s.valveOperability(v) == Operability.UNKNOWN ? "operability unknown" : "past its inspection interval";
-                fallbacks.add(new Isolation.Fallback(s.valveId(v), why, r.isolable(), r.valveIds(), thenClose, addIds, meters));
+                fallbacks.add(new Isolation.Fallback(s.valveId(v), why, r.isolable(), r.valveIds(), thenClose, addIds, meters,
+                        r.stationsToStop(), r.sourcesInRegion()));
             }
         }
-        return new PlanEvaluation.Suggestion(order, fallbacks);
+        PlanEvaluation.Suggestion sug = new PlanEvaluation.Suggestion(order, fallbacks);
+        new InstructionCheck(segs).suggestion(order, sug, "plan step " + st.step().number() + " (" + st.step().describe() + ")");
+        return sug;
     }
 
     private static boolean overdue(NetworkState s, int v, StepContext.Settings settings) {

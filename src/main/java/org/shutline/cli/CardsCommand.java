@@ -201,10 +201,15 @@ public final class CardsCommand implements Callable<Integer> {
                     rows.add(List.of("  source " + f.id(), "shut the supply at the source"));
                     continue;
                 }
-                rows.add(List.of("  station " + f.id(), "close inlet valve " + (f.inletValves().isEmpty() ? "(none recorded)" : String.join(", ", f.inletValves()))
-                        + (f.name() == null ? "" : " (" + f.name() + ")")));
-                rows.add(List.of("    if it will not close", "upstream " + (f.upstream().valveIds().isEmpty() ? "(none)" : String.join(", ", f.upstream().valveIds()))
-                        + "; also puts off " + f.upstream().serviceIdsOff().size() + " services"));
+                rows.add(List.of("  station " + f.id(), "stop it: " + (f.inletValves().isEmpty() ? "no valve to close" : "close " + String.join(", ", f.inletValves()))
+                        + (f.stop().stoppable() ? "" : " (valves alone cannot stop it)") + (f.name() == null ? "" : " (" + f.name() + ")")));
+                if (!f.stop().note().isEmpty()) rows.add(List.of("    note", f.stop().note()));
+                rows.add(List.of("    also", (f.stop().alsoStopped().isEmpty() ? "stops no other station" : "stops " + String.join(", ", f.stop().alsoStopped()))
+                        + "; " + f.stop().otherOff().cardinality() + " services off besides the station's own district"));
+                for (Isolation.Fallback x : f.upstream().fallbacks()) {
+                    rows.add(List.of("    if " + x.valveId() + " fails", "then close " + (x.thenClose().isEmpty() ? "nothing more" : String.join(", ", x.thenClose()))
+                            + "; adds " + x.addedServices().size() + " services" + (x.isolable() ? "" : "; valves alone then cannot stop it")));
+                }
             }
             rows.add(List.of("  at risk", op.atRisk().cardinality() + " services, " + op.atRiskMeters() + " meters; check each before relight"));
             if (!op.criticalAtRisk().isEmpty()) rows.add(List.of("  critical at risk", String.join(", ", op.criticalAtRisk())));

@@ -8,6 +8,7 @@ import java.util.Locale;
 import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.OverpressureShutoff;
+import org.shutline.analysis.StationStop;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ResponseSizing;
 import org.shutline.analysis.Restoration;
@@ -113,8 +114,16 @@ final class EmergencyReport {
             o.put("name", f.name());
             o.put("from_system", f.fromSystem());
             o.set("inlet_valves", Json.strings(f.inletValves()));
+            if (f.stop() != null) {
+                o.put("stoppable", f.stop().stoppable());
+                o.put("by_station_valves", f.stop().byStationValves());
+                o.put("stop_note", f.stop().note());
+                o.set("also_stops", Json.strings(f.stop().alsoStopped()));
+                o.put("other_services_off", f.stop().otherOff().cardinality());
+                o.put("own_district_services", f.stop().ownDistrict().cardinality());
+            }
             if (f.upstream() != null) {
-                ObjectNode u = o.putObject("upstream");
+                ObjectNode u = o.putObject("stop");
                 u.put("isolable", f.upstream().isolable());
                 u.set("valves_to_close", Json.strings(f.upstream().valveIds()));
                 ArrayNode fb = u.putArray("fallbacks");
@@ -256,15 +265,17 @@ final class EmergencyReport {
                 sb.append("  source ").append(f.id()).append(": shut the supply at the source\n");
                 continue;
             }
+            StationStop.Result stop = f.stop();
             sb.append("  station ").append(f.id()).append(f.name() == null ? "" : " (" + f.name() + ")").append(" from ")
-                    .append(f.fromSystem()).append(": close inlet valve ")
-                    .append(f.inletValves().isEmpty() ? "(none recorded)" : String.join(", ", f.inletValves())).append('\n');
-            Isolation.Result u = f.upstream();
-            sb.append("    if it will not close: upstream valves ")
-                    .append(u.valveIds().isEmpty() ? "(none)" : String.join(", ", u.valveIds()))
-                    .append(u.isolable() ? "" : " (" + u.reason() + ")")
-                    .append(", which also put off ").append(u.serviceIdsOff().size()).append(" services\n");
-            for (Isolation.Fallback x : u.fallbacks()) fallbackText(sb, "      ", x);
+                    .append(f.fromSystem()).append(": stop it: ")
+                    .append(stop.valves().isEmpty() ? "no valve to close" : "close " + String.join(", ", stop.valves()))
+                    .append(stop.stoppable() ? "" : " (valves alone cannot stop it)").append('\n');
+            if (!stop.note().isEmpty()) sb.append("    ").append(stop.note()).append('\n');
+            sb.append("    this also ").append(stop.alsoStopped().isEmpty() ? "stops no other station"
+                    : "stops station " + String.join(", ", stop.alsoStopped()))
+                    .append(" and puts off ").append(stop.otherOff().cardinality()).append(" services besides the station's own district (")
+                    .append(stop.ownDistrict().cardinality()).append(")\n");
+            for (Isolation.Fallback x : f.upstream().fallbacks()) fallbackText(sb, "      ", x);
         }
         sb.append(String.format(Locale.ROOT, "Services at risk (fed on %s): %d, meters %d; check each for damage before relight%n",
                 r.systemId(), r.atRisk().cardinality(), r.atRiskMeters()));

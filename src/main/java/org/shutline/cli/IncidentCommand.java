@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.InstructionCheck;
 import org.shutline.analysis.OverpressureShutoff;
 import org.shutline.analysis.ResponseRates;
 import org.shutline.analysis.ResponseSettings;
@@ -159,12 +160,14 @@ public final class IncidentCommand implements Callable<Integer> {
                 return NetworkInput.badInput(err, "incident: " + (sys == null ? "no pressure system at the place given" : "no pressure system '" + sys + "'"));
             }
             OverpressureShutoff.Result r = OverpressureShutoff.of(segs, options, sys, settings);
+            InstructionCheck.verify(segs, r, "incident --kind overpressure of " + sys + " at " + place.label());
             EmergencyReport.overpressureJson(root, net, r);
             EmergencyReport.overpressureText(sb, net, r);
             rest = r.restoration();
             workSet = r.off();
         } else {
             IncidentResponse.Result r = IncidentResponse.leak(segs, options, place.zone(), settings);
+            InstructionCheck.verify(segs, r, "incident --kind " + kind.name() + " at " + place.label());
             root.put("system", r.systemId());
             EmergencyReport.leakJson(root, segs.state(), r, grid);
             EmergencyReport.leakText(sb, segs.state(), r, grid);

@@ -88,6 +88,7 @@ public final class IsolateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
+        org.shutline.analysis.InstructionCheck.verify(segs, r, "isolate " + zoneText());
         out.print(format == Format.json ? Json.write(json(t.network(), r)) : text(t.network(), r));
         out.flush();
         return 0;

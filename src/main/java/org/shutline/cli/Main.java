@@ -7,7 +7,10 @@ import picocli.CommandLine.Command;
  * The {@code shutline} command: one subcommand class per command, registered here.
  * Exit codes: 0 done (for {@code check}: no error findings), 1 {@code check} found
  * errors, 2 the input could not be read or the command line is wrong, 3 an internal
- * error (the exception and where it was thrown go to stderr for a bug report).
+ * error (the exception and where it was thrown go to stderr for a bug report), among
+ * them an answer whose re-trace check failed
+ * ({@link org.shutline.analysis.UnverifiedInstructionException}: the query is named and
+ * no instruction printed).
  */
 @Command(name = "shutline", mixinStandardHelpOptions = true, version = "shutline 0.1.0",
     description = "Gas distribution outage zoning: network check, feed trace, valve isolation, work plans, maps.",
@@ -46,6 +49,13 @@ public final class Main implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
         cl.setExecutionExceptionHandler((e, line, parsed) -> {
+            if (e instanceof org.shutline.analysis.UnverifiedInstructionException u) {
+                // an answer that its re-trace does not confirm is never printed as an instruction
+                line.getErr().println("shutline: " + u.getMessage());
+                line.getErr().println("  no instruction was printed for \"" + u.query() + "\"; please report this with the network and command");
+                line.getErr().flush();
+                return INTERNAL_ERROR;
+            }
             // a broken contract inside Shutline, not bad input: say so, with where it happened
             line.getErr().println("shutline: internal error: " + e);
             for (Throwable t = e; t != null; t = t.getCause()) {

@@ -114,6 +114,23 @@ public final class FeedTrace {
         return flow.fedServices(flow.reach(flow.sourceNodes(), -1));
     }
 
+    /**
+     * Live nodes by one search of the node graph (not the segment graph) from the
+     * sources not in {@code shutSources} (source indices; may be null): the independent
+     * path the instruction check re-traces with. O(nodes + edges).
+     */
+    public static BitSet liveNodes(NetworkState s, BitSet shutSources) {
+        Flow flow = new Flow(s, Progress.NONE);
+        int[] starts = flow.sourceNodes();
+        if (shutSources != null) for (int i = 0; i < starts.length; i++) if (shutSources.get(i)) starts[i] = -1;
+        return flow.reach(starts, -1);
+    }
+
+    /** Services fed when {@code liveNodes} are the live nodes of the state (on a live pipe edge with live ends). */
+    public static BitSet fedServices(NetworkState s, BitSet liveNodes) {
+        return new Flow(s, Progress.NONE).fedServices(liveNodes);
+    }
+
     public static Result run(NetworkState s) {
         return run(s, Progress.NONE);
     }
