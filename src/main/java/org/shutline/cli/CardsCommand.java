@@ -98,6 +98,7 @@ public final class CardsCommand implements Callable<Integer> {
         }
         Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
+        org.shutline.analysis.InstructionCheck.verify(ps, cards, "cards " + planFile.getFileName());
         GridSheets grid = GridSheets.of(t.network().crs());
         if (!noPdf) {
             List<Sheet> sheets = new ArrayList<>();

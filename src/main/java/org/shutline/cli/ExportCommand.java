@@ -187,7 +187,10 @@ public final class ExportCommand implements Callable<Integer> {
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         NetworkState base = NetworkState.of(t);
-        Isolation.Result r = new Isolation(ValveSegments.build(base), iso).isolate(zone);
+        ValveSegments baseSegs = ValveSegments.build(base);
+        Isolation.Result r = new Isolation(baseSegs, iso).isolate(zone);
+        org.shutline.analysis.InstructionCheck.verify(baseSegs, r, "export " + (where.main != null ? "main " + where.main
+                : String.format(Locale.ROOT, "point %.1f,%.1f", where.at[0], where.at[1])));
         String subject = where.main != null ? "Incident on main " + where.main
                 : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],
                     system == null ? "" : " (" + system + ")");

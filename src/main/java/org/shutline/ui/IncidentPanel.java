@@ -75,7 +75,10 @@ final class IncidentPanel extends JPanel {
         window.run(new Task<>("isolate", p -> {
             p.begin("isolate", 0);
             Isolation iso = isolationFor(ws);
-            return iso.isolate(new Zone.AtPoint(x, y, null));
+            Isolation.Result r = iso.isolate(new Zone.AtPoint(x, y, null));
+            // never shown unless its re-trace confirms it (a mismatch fails the task with the query named)
+            org.shutline.analysis.InstructionCheck.verify(ws.segments(), r, String.format(Locale.ROOT, "incident at %.1f, %.1f", x, y));
+            return r;
         }, r -> show(ws, r, x, y, crewCount), t -> text.setText("Isolation failed: " + t.getMessage())));
     }
 

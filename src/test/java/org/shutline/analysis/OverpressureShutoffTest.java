@@ -24,18 +24,25 @@ class OverpressureShutoffTest {
             assertThat(f.isStation()).isTrue();
             assertThat(f.id()).isEqualTo("R1");
             assertThat(f.fromSystem()).isEqualTo("HP");
+            // V1 (kind station, 10 m from R1) is the only link between the source side X0 and the inlet side X1:
+            // closing it leaves R1's inlet dead, so it is the stop, by the station's own valve
             assertThat(f.inletValves()).containsExactly("V1");
-            // if V1 will not close: the region is X0 + X1, which holds the source: only the supply can stop it
-            assertThat(f.upstream().isolable()).isFalse();
-            assertThat(f.upstream().sourcesInRegion()).containsExactly("Sa");
+            assertThat(f.stop().byStationValves()).isTrue();
+            assertThat(f.upstream().isolable()).isTrue();
+            assertThat(f.upstream().valveIds()).containsExactly("V1");
+            // own district: s3 and s4 (R1 alone feeds LP); besides them the stop puts off s2, on the inlet side X1
+            assertThat(t.serviceIds(f.stop().ownDistrict())).containsExactly("s3", "s4");
+            assertThat(t.serviceIds(f.stop().otherOff())).containsExactly("s2");
         });
         assertThat(t.serviceIds(r.atRisk())).containsExactly("s3", "s4");
         assertThat(r.atRiskOrdered()).containsExactly("s4", "s3"); // critical customers first
         assertThat(r.criticalAtRisk()).containsExactly("s4");
         assertThat(r.atRiskMeters()).isEqualTo(5);
-        assertThat(t.serviceIds(r.off())).containsExactly("s3", "s4");
+        // the shut-off as done: V1 closed puts off the inlet side X1 (s2, 1 meter) and the district (s3, s4)
+        assertThat(t.serviceIds(r.off())).containsExactly("s2", "s3", "s4");
         assertThat(r.restoration().deadSystems()).containsExactly("LP");
-        assertThat(r.restoration().metersRelight()).isEqualTo(5);
+        assertThat(r.restoration().metersRelight()).isEqualTo(6);
+        InstructionCheck.verify(ValveSegments.build(t.state()), r, "over-pressure of LP");
     }
 
     /* Over-pressure of HP, fed by the source: shut the supply; HP and the LP district behind it go dead. */

@@ -3,6 +3,7 @@ package org.shutline.analysis;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
+import java.util.List;
 import java.time.LocalDate;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
@@ -13,6 +14,7 @@ import org.shutline.testnet.AsciiNet;
 import org.shutline.testnet.TestNet;
 import org.shutline.topology.NetworkBuilder;
 import org.shutline.topology.Topology;
+import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
 
@@ -75,8 +77,15 @@ class RiskTablesTest {
         assertThat(rt.stations()).filteredOn(r -> r.stationId().equals("ST-S1")).singleElement().satisfies(r -> {
             assertThat(r.servicesOff()).isEqualTo(513);
             assertThat(r.metersOff()).isEqualTo(653);
-            assertThat(r.inletValves()).containsExactly("V-013");
+            // V-013 (kind station) sits inline on IP-1 1 m from the station's tee (SampleTown), so IP-1 feeds the
+            // tee from both sides: V-013 alone leaves ST-S1 fed; its stop must also close the next valve the other way
+            assertThat(r.inletValves()).contains("V-013").hasSize(2);
         });
+        NetworkState s0 = NetworkState.of(t);
+        int st = stationIndex(s0, "ST-S1");
+        assertThat(FeedTrace.run(close(s0, List.of("V-013"))).servicesFedThrough(st).cardinality()).as("V-013 alone").isEqualTo(513);
+        List<String> stop = rt.stations().stream().filter(r -> r.stationId().equals("ST-S1")).findFirst().orElseThrow().inletValves();
+        assertThat(FeedTrace.run(close(s0, stop)).servicesFedThrough(st).cardinality()).as("re-trace with " + stop).isZero();
     }
 
     /** Every segment row against Isolation and BruteForceOutages; every station and valve row against brute force. */
@@ -121,5 +130,15 @@ class RiskTablesTest {
     private static int indexOf(ValveSegments vs, String id) {
         for (int v = 0; v < vs.state().valveCount(); v++) if (vs.state().valveId(v).equals(id)) return v;
         throw new AssertionError("no valve " + id);
+    }
+
+    private static NetworkState close(NetworkState s, List<String> ids) {
+        for (int v = 0; v < s.valveCount(); v++) if (ids.contains(s.valveId(v))) s = s.withValveClosed(v, true);
+        return s;
+    }
+
+    private static int stationIndex(NetworkState s, String id) {
+        for (int st = 0; st < s.stationCount(); st++) if (s.stationId(st).equals(id)) return st;
+        throw new AssertionError(id);
     }
 }
