@@ -44,7 +44,29 @@ class InstructionCheckSampleTest {
             for (Isolation.ValveStep v : stop.isolation().valves()) closed = closed.withValveClosed(v.valve(), true);
             FeedTrace.Result tr = FeedTrace.run(closed);
             assertThat(tr.servicesFedThrough(st).cardinality()).as(stop.stationId() + " with " + stop.valves() + " closed").isZero();
-            System.out.println(stop.stationId() + ": " + stop.summary() + " | fallbacks " + stop.isolation().fallbacks());
+            // the inline station valve alone (the old nearness rule) leaves every station but ST-N2 fed:
+            // SampleTown puts each inlet valve on IP-1 1 m along the main from the station's tee
+            List<Integer> own = StationStop.ownValveLinks(s, segs.graph(), s.network().stations().get(st));
+            assertThat(own).as(stop.stationId() + " station valves").hasSize(1);
+            NetworkState ownClosed = s.withValveClosed(segs.graph().linkFeature(own.get(0)), true);
+            boolean ownEnough = FeedTrace.run(ownClosed).servicesFedThrough(st).isEmpty();
+            assertThat(stop.byStationValves()).as(stop.stationId()).isEqualTo(ownEnough);
+            if (!ownEnough) assertThat(stop.valves()).as(stop.stationId()).hasSizeGreaterThan(1).contains(s.valveId(segs.graph().linkFeature(own.get(0))));
+            // IP-1 carries no services: the stops put off only the stations' own districts
+            assertThat(stop.otherOff().isEmpty()).as(stop.stationId()).isTrue();
+        }
+    }
+
+    @Test
+    void everyOverpressureShutOffPassesTheReTrace() {
+        for (String sys : List.of("IP-1", "LP-NORTH", "LP-SOUTH", "LP-EAST")) {
+            OverpressureShutoff.Result r = OverpressureShutoff.of(segs, OPTIONS, sys, ResponseSettings.DEFAULT);
+            InstructionCheck.verify(segs, r, "over-pressure of " + sys);
+            if (sys.equals("LP-SOUTH")) {
+                // sample-gis/README.md: ST-S1 alone feeds LP-SOUTH, 513 services and 653 meters; IP-1 has none
+                assertThat(r.off().cardinality()).isEqualTo(513);
+                assertThat(r.metersOff()).isEqualTo(653);
+            }
         }
     }
 

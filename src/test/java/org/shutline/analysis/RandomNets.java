@@ -16,7 +16,9 @@ import org.shutline.topology.Topology;
  * 10 m lattice of random points; about 60 % of mains carry a valve at their midpoint;
  * valve states: 10 % closed, 15 % inoperable, 15 % unknown; a few mains abandoned;
  * services on random main pieces, 1-3 meters, about 10 % critical; sometimes a source
- * on the low-pressure part too. {@code forceInoperable} valve ids are made inoperable
+ * on the low-pressure part too. Station inlets vary ({@link org.shutline.testnet.RandomNet#stationInlet}): no valve, a
+ * station-kind valve on a stub, two station-kind valves, or an inline station valve
+ * that alone does not stop the station. {@code forceInoperable} valve ids are made inoperable
  * (the same network otherwise: the random draws do not depend on it).
  */
 final class RandomNets {
@@ -59,9 +61,10 @@ final class RandomNets {
             mainIds.add(id);
             pieces.add(np);
         }
+        Random inlets = new Random(seed * 31 + 7); // separate draws: the rest of the network is as before
         for (int k = 1 + rnd.nextInt(3); k > 0; k--) {
             int in = rnd.nextInt(h), out = h + rnd.nextInt(l);
-            sk.station("R" + k, "HP", "LP", in, out);
+            sk.station("R" + k, "HP", "LP", org.shutline.testnet.RandomNet.stationInlet(sk, inlets, "R" + k, "HP", in, rnd.nextInt(h)), out);
         }
         sk.source("S1", rnd.nextInt(h));
         if (rnd.nextBoolean()) sk.source("S2", rnd.nextInt(h));

@@ -12,7 +12,9 @@ import org.shutline.model.Operability;
  * the middle of 40 % of them), systems linked by 1 to 3 stations from system k to k+1;
  * 1 or 2 sources in the first system and sometimes one in another; valves operable
  * yes / no / unknown about 60 / 20 / 20 %, 10 % normally closed; 5 % of mains abandoned;
- * 0 to 2 services per main with 1 to 4 meters, a few critical.
+ * 0 to 2 services per main with 1 to 4 meters, a few critical. Station inlets vary
+ * ({@link #stationInlet}): no valve, a station-kind valve on a stub, two, or an inline
+ * station valve that alone does not stop the station.
  */
 public final class RandomNet {
     private RandomNet() {}
@@ -62,10 +64,13 @@ public final class RandomNet {
             }
         }
         int stationNo = 0;
+        Random inlets = new Random(seed * 31 + 7); // separate draws: the rest of the network is as before
         for (int k = 0; k + 1 < systems; k++) {
             int links = 1 + rnd.nextInt(3);
             for (int s = 0; s < links; s++) {
-                sk.station("st" + (stationNo++), "P" + k, "P" + (k + 1), pick(grids.get(k), rnd), pick(grids.get(k + 1), rnd));
+                String id = "st" + (stationNo++);
+                int in = pick(grids.get(k), rnd), out = pick(grids.get(k + 1), rnd);
+                sk.station(id, "P" + k, "P" + (k + 1), stationInlet(sk, inlets, id, "P" + k, in, pick(grids.get(k), inlets)), out);
             }
         }
         int sources = 1 + rnd.nextInt(2);
@@ -110,6 +115,42 @@ public final class RandomNet {
         sk.source("src0", g[0][0]);
         sk.source("src1", g[w - 1][h - 1]);
         return new TestNet(sk.build(), java.util.Map.of());
+    }
+
+    /**
+     * The inlet node of a station at node {@code in}: as drawn (no valve), on a 1 m stub
+     * behind a valve of kind station, with a second station valve on a stub to
+     * {@code other} (two inlet valves), or inline: the tee joined to {@code in} by plain
+     * pipe and to {@code other} through a station valve 1 m from the tee, so that valve
+     * alone does not stop the station. Station valves are sometimes unknown or never checked.
+     */
+    public static int stationInlet(NetSketch sk, Random rnd, String station, String sys, int in, int other) {
+        int kind = rnd.nextInt(4);
+        if (kind == 0) return in;
+        double x = sk.nodeX(in), y = sk.nodeY(in);
+        int tee = sk.node(x + 1.5, y + 0.5);
+        String v1 = "sv" + station + "a";
+        if (kind == 3) {
+            sk.main("st" + station + "a", sys, MainStatus.ACTIVE, List.of(NetSketch.Stop.node(in), NetSketch.Stop.node(tee)));
+        } else {
+            sk.main("st" + station + "a", sys, MainStatus.ACTIVE,
+                    List.of(NetSketch.Stop.node(in), NetSketch.Stop.valve(v1, x + 0.75, y + 0.25), NetSketch.Stop.node(tee)));
+            stationValve(sk, rnd, v1);
+        }
+        if (kind >= 2 && other != in) {
+            String v2 = "sv" + station + "b";
+            sk.main("st" + station + "b", sys, MainStatus.ACTIVE,
+                    List.of(NetSketch.Stop.node(tee), NetSketch.Stop.valve(v2, x + 2.5, y + 0.5), NetSketch.Stop.node(other)));
+            stationValve(sk, rnd, v2);
+        }
+        return tee;
+    }
+
+    private static void stationValve(NetSketch sk, Random rnd, String id) {
+        sk.kind(id, org.shutline.model.ValveKind.STATION);
+        int r = rnd.nextInt(6);
+        if (r == 0) sk.operable(id, Operability.UNKNOWN);
+        else if (r == 1) sk.neverChecked(id);
     }
 
     private static int pick(int[][] g, Random rnd) {
