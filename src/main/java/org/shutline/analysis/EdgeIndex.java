@@ -48,7 +48,7 @@ final class EdgeIndex {
     /**
      * The edge nearest (x, y) on an active main (of system {@code systemId} when not null),
      * exact ties to the lower main id; -1 when there is none. Searches growing squares
-     * around the point: a candidate at distance d found inside a square of half-side
+     * around the point (exact ties then to the lower edge index); a candidate at distance d found inside a square of half-side
      * r >= d is nearest, since anything nearer meets the square.
      */
     int nearest(double x, double y, String systemId) {
@@ -64,7 +64,8 @@ final class EdgeIndex {
                 Geometry g = EdgeGeometry.line(s, e);
                 double d = g == null ? Math.hypot(s.nodeX(s.edgeFrom(e)) - x, s.nodeY(s.edgeFrom(e)) - y) : g.distance(p);
                 String id = s.mainId(main);
-                if (d < best || (d == best && id.compareTo(bestId) < 0)) {
+                // ties: lower main id, then lower edge (the plain scan's order), so both give the same edge
+                if (d < best || (d == best && (id.compareTo(bestId) < 0 || (id.equals(bestId) && e < bestEdge)))) {
                     best = d;
                     bestId = id;
                     bestEdge = e;

@@ -84,7 +84,10 @@ class EmergencyCommandsTest {
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("isolable").asBoolean()).isFalse();
         assertThat(texts(j.get("stations_to_stop"))).containsExactly("ST-N1");
-        assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011");
+        // ST-N1's station valve V-011 sits inline on IP-1 (SampleTown): alone it leaves the station fed from the other
+        // side; the verified stop closes the IP-1 stretch around the tee, V-011 and V-013 (ST-S1's inline valve, the
+        // next valve east), as `shutline trace --close V-011,V-013` confirms (ST-N1 then feeds nothing)
+        assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011", "V-013");
         assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-031", "V-033", "V-037");
         assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CLINIC", "SV-C-SCHOOL1");
         assertThat(j.get("meters_off").asInt()).isEqualTo(650);
@@ -125,8 +128,12 @@ class EmergencyCommandsTest {
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("feeds")).singleElement().satisfies(f -> {
             assertThat(f.get("id").asText()).isEqualTo("ST-S1");
-            assertThat(texts(f.get("inlet_valves"))).containsExactly("V-013");
-            assertThat(texts(f.get("upstream").get("valves_to_close"))).doesNotContain("V-013").isNotEmpty();
+            // V-013 alone leaves ST-S1 fed from the west along IP-1: the stop also closes the next IP-1 valve east, V-004
+            // (the same pair that isolates that IP-1 stretch in gridReferenceIsTheCentreOfItsCell)
+            assertThat(texts(f.get("inlet_valves"))).containsExactly("V-013", "V-004");
+            assertThat(f.get("by_station_valves").asBoolean()).isFalse();
+            assertThat(texts(f.get("stop").get("valves_to_close"))).containsExactly("V-013", "V-004");
+            assertThat(f.get("other_services_off").asInt()).isZero(); // IP-1 carries no services
         });
         assertThat(j.get("services_at_risk").asInt()).isEqualTo(513);
         assertThat(j.get("meters_at_risk").asInt()).isEqualTo(653);
@@ -195,7 +202,7 @@ class EmergencyCommandsTest {
             assertThat(text).contains("Emergency card: phase 1").contains("OVER-PRESSURE OF LP-SOUTH").contains("CAUTION");
         }
         CommandsTest.Run txt = run("cards", NET, PLAN, "--no-pdf", "--as-of", "2026-12-01");
-        assertThat(txt.out()).contains("=== Phase 2").contains("close inlet valve V-013").contains(Caution.TEXT);
+        assertThat(txt.out()).contains("=== Phase 2").contains("stop it: close V-013, V-004").contains(Caution.TEXT);
         assertThat(run("cards", NET, dir.resolve("missing.yaml").toString(), "--no-pdf").code()).isEqualTo(2);
     }
 

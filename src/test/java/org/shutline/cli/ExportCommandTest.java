@@ -120,13 +120,14 @@ class ExportCommandTest {
                     .contains("Legend").contains("Off gas (gas-off extent)").contains("Isolation distance")
                     .contains("District regulator station").contains("Critical customer")
                     .contains("r = 100 m") // the isolation circle's label: ERG (2024) Guide 115 default of 100 m
-                    .contains("SV-C-CARE"); // the care home off gas is listed beside the map
+                    .contains("see the lists"); // the side list is full: ST-S1's verified stop adds V-004 to the valves
             assertThat(oneLine(page1)).contains(oneLine(Caution.TEXT));
             String all = text(doc, 1, doc.getNumberOfPages());
             assertThat(all).contains("Sheet 2 of").contains("continued on sheet").contains("Valve operation list")
                     .contains("Customers off gas (" + isolation.get("services_off").asInt() + " services, "
                             + isolation.get("meters_off").asLong() + " meters)") // the same as shutline isolate says
-                    .contains("station-feeds-zone");
+                    .contains("station-feeds-zone")
+                    .contains("SV-C-CARE"); // the care home off gas is in the lists
             // every page carries the caution
             int n = doc.getNumberOfPages();
             for (int p = 1; p <= n; p++) {
