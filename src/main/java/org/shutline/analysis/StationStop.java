@@ -79,6 +79,7 @@ public final class StationStop {
         /** One line for an operator: what to close and what else it does. */
         public String summary() {
             if (isolation == null) return note;
+            if (!stoppable) return note + (valves.isEmpty() ? "" : "; with that done, close " + String.join(", ", valves));
             StringBuilder sb = new StringBuilder();
             sb.append(valves.isEmpty() ? "no valve to close" : "close " + String.join(", ", valves));
             if (!alsoStopped.isEmpty()) sb.append("; also stops ").append(String.join(", ", alsoStopped));

@@ -158,8 +158,8 @@ public final class RiskCommand implements Callable<Integer> {
         }
         sb.append("Station outages:\n");
         for (RiskTables.StationRow r : t.stations()) {
-            sb.append(String.format(Locale.ROOT, "  %-8s %5d services %5d meters, %d critical; inlet valves %s%n", r.stationId(), r.servicesOff(),
-                    r.metersOff(), r.criticalOff(), r.inletValves().isEmpty() ? "(none)" : String.join(", ", r.inletValves())));
+            sb.append(String.format(Locale.ROOT, "  %-8s %5d services %5d meters, %d critical; stop: %s%n", r.stationId(), r.servicesOff(),
+                    r.metersOff(), r.criticalOff(), r.stopNote()));
         }
         sb.append("Valves to fix first (failure enlarges an isolation most):\n");
         for (RiskTables.ValveRow r : t.valvesToFix().subList(0, Math.min(5, t.valvesToFix().size()))) {
