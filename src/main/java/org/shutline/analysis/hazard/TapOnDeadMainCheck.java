@@ -22,6 +22,8 @@ import org.shutline.trace.NetworkState;
 public final class TapOnDeadMainCheck implements HazardCheck {
     @Override public String code() { return "tap-on-dead-main"; }
 
+    @Override public boolean mitigatedByAttendance() { return true; }
+
     @Override public String description() {
         return "station sensing tap on an abandoned, cut-away or dead main: the station opens wide";
     }
