@@ -106,9 +106,16 @@ class HazardRulesTest {
 
     @Test
     void stationWithoutMonitorOrReliefIsRecordedOnce() throws PlanException {
-        // RS-1 has relief, RS-2 a monitor: nothing. Taking neither away, no finding; the rule reads the records.
+        // RS-2 has a monitor: nothing. RS-1 has only a relief whose capacity is not recorded (relief_full empty):
+        // a relief limits an over-pressure only when full-capacity (49 CFR 192.201(a)), so it warns, once, as recorded.
         PlanEvaluation.Result r = run(PlanNet.build(TAP_ON_A), "      - open: V-1\n");
-        assertThat(r.recordedHazards()).noneMatch(h -> h.code().equals("no-secondary-protection"));
+        assertThat(r.recordedHazards()).filteredOn(h -> h.code().equals("no-secondary-protection")).singleElement()
+                .satisfies(h -> {
+                    assertThat(h.features()).containsExactly("RS-1");
+                    assertThat(h.severity()).isEqualTo(Severity.WARNING);
+                    assertThat(h.message()).contains("unrecorded capacity");
+                });
+        assertThat(at(r, 1, "no-secondary-protection")).isEmpty();
         assertThat(new org.shutline.analysis.hazard.SecondaryProtectionCheck().description()).isNotBlank();
     }
 

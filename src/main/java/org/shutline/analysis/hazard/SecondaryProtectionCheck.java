@@ -13,8 +13,6 @@ import org.shutline.model.Station;
 public final class SecondaryProtectionCheck implements HazardCheck {
     @Override public String code() { return "no-secondary-protection"; }
 
-    @Override public boolean mitigatedByAttendance() { return true; }
-
     @Override public String description() {
         return "station with no monitor or relief recorded";
     }
