@@ -129,4 +129,23 @@ class StationWorkRulesTest {
             assertThat(h.message()).contains("1 services (3 meters)").contains("3 meters need a relight");
         });
     }
+
+    @Test
+    void cutNearASensingLineWarns() throws PlanException {
+        // RS-1 at (100,100), tap T-1 at (100,60): no control_lines layer, so the line is assumed straight from
+        // (100,100) to (100,60). A cut on LP-A at (100,50) is 10 m from the tap: within the 10 m setting (common
+        // practice); with V-1 closed and LP-A fed by RS-1 it is live, but the rule looks at the line only.
+        // The step before (close V-1) has no work point: nothing.
+        Topology t = PlanNet.build(HazardRulesTest.TAP_ON_A);
+        PlanEvaluation.Result r = run(t, "      - close: V-1\n      - cut: { main: LP-A, at: [100, 50] }\n");
+        assertThat(at(r, 1, "work-near-sensing-line")).isEmpty();
+        assertThat(at(r, 2, "work-near-sensing-line")).singleElement().satisfies(h -> {
+            assertThat(h.severity()).isEqualTo(Severity.WARNING);
+            assertThat(h.features()).containsExactly("RS-1", "T-1", "LP-A");
+            assertThat(h.message()).contains("10.0 m").contains("assumed straight");
+        });
+        // 11 m away (100, 49): beyond the setting, nothing
+        PlanEvaluation.Result far = run(t, "      - close: V-1\n      - cut: { main: LP-A, at: [100, 49] }\n");
+        assertThat(at(far, 2, "work-near-sensing-line")).isEmpty();
+    }
 }
