@@ -259,6 +259,12 @@ final class EmergencyReport {
             sb.append("  station ").append(f.id()).append(f.name() == null ? "" : " (" + f.name() + ")").append(" from ")
                     .append(f.fromSystem()).append(": close inlet valve ")
                     .append(f.inletValves().isEmpty() ? "(none recorded)" : String.join(", ", f.inletValves())).append('\n');
+            for (org.shutline.model.Station st : net.stations()) {
+                if (st.id().equals(f.id())) {
+                    sb.append("    ").append(org.shutline.analysis.OverpressureLimit.judge(net, st, org.shutline.model.PressureUnit.KPA,
+                            org.shutline.analysis.OverpressureLimit.DEFAULT_LOW_PRESSURE_LIMIT)).append('\n');
+                }
+            }
             Isolation.Result u = f.upstream();
             sb.append("    if it will not close: upstream valves ")
                     .append(u.valveIds().isEmpty() ? "(none)" : String.join(", ", u.valveIds()))
