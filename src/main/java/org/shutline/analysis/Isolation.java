@@ -36,9 +36,9 @@ import org.shutline.trace.ValveSegments;
  * <li>Listed valves are ordered from the feeding side: by the hop distance of their far
  *     side from the sources in the segment graph before closing (upstream feeds first),
  *     then by valve id.</li>
- * <li>Each listed valve that is {@code unknown} or past its inspection interval (15
- *     months by default, 49 CFR 192.747; a valve never checked, {@code checked} null,
- *     counts as overdue unless {@link Options#neverCheckedIsOverdue()} is false) gets a
+ * <li>Each listed valve that is doubtful by {@link ValveDoubt} (unknown, inoperable,
+ *     never checked, past its interval or not checked in the previous calendar year,
+ *     49 CFR 192.747) gets a
  *     fallback: the region grown across it (and on across inoperable valves) is isolated
  *     again; the fallback lists that full valve set, the valves to close in addition, and
  *     the services this adds.</li>
@@ -62,18 +62,27 @@ import org.shutline.trace.ValveSegments;
  */
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
-    public static final Period DEFAULT_INSPECTION_INTERVAL = Period.ofMonths(15);
+    public static final Period DEFAULT_INSPECTION_INTERVAL = ValveDoubt.INTERVAL;
 
-    /** Settings: the date checks are measured against, the interval, and how never-checked valves count. */
-    public record Options(LocalDate asOf, Period inspectionInterval, boolean neverCheckedIsOverdue) {
+    /** Settings: a thin carrier of the {@link ValveDoubt} settings (as-of date and inspection interval). */
+    public record Options(LocalDate asOf, Period inspectionInterval) {
         public Options {
             Objects.requireNonNull(asOf, "asOf");
             Objects.requireNonNull(inspectionInterval, "inspectionInterval");
         }
 
-        /** The 15-month interval, never-checked valves overdue, checks measured at {@code date}. */
+        /** The 15-month interval, checks measured at {@code date}. */
         public static Options defaults(LocalDate date) {
-            return new Options(date, DEFAULT_INSPECTION_INTERVAL, true);
+            return new Options(date, DEFAULT_INSPECTION_INTERVAL);
+        }
+
+        public static Options of(ValveDoubt.Settings s) {
+            return new Options(s.asOf(), s.interval());
+        }
+
+        /** The settings of the doubtful-valve rule. */
+        public ValveDoubt.Settings doubt() {
+            return new ValveDoubt.Settings(asOf, inspectionInterval);
         }
     }
 
@@ -169,6 +178,7 @@ public final class Isolation {
     private final SegmentGraph sg;
     private final NetworkState state;
     private final Options options;
+    private final ValveDoubt.Settings doubt;
     private final BitSet before;
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
@@ -194,6 +204,7 @@ public final class Isolation {
         this.sg = segments.graph();
         this.state = segments.state();
         this.options = options;
+        this.doubt = options.doubt();
         this.before = sg.reachFromSources(null, null);
         this.hops = hopsFromSources();
         List<Service> all = state.network().services();
@@ -449,16 +460,11 @@ public final class Isolation {
 
     /** Null when the valve is relied on without doubt; else why it needs a fallback. */
     private String whyFallback(int v) {
-        if (state.valveOperability(v) == Operability.UNKNOWN) return "operability unknown";
-        LocalDate checked = state.valveChecked(v);
-        if (checked == null) return options.neverCheckedIsOverdue() ? "never checked" : null;
-        LocalDate due = checked.plus(options.inspectionInterval());
-        return due.isBefore(options.asOf()) ? "inspection overdue (last checked " + checked + ")" : null;
+        return ValveDoubt.of(state, v, doubt).why();
     }
 
     private boolean overdue(int v) {
-        String w = whyFallback(v);
-        return w != null && !w.equals("operability unknown");
+        return ValveDoubt.of(state, v, doubt).overdue();
     }
 
     private Fallback fallback(int v, String why, Core core, Core grown) {

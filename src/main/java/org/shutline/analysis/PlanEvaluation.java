@@ -38,7 +38,10 @@ import org.shutline.trace.ValveSegments;
  * <p>Hazards: every rule runs on every state. A step lists the hazards that are new at
  * it (not present, by code and features, in the state before); those still present
  * from earlier are listed as continuing. Hazards of the network as recorded are
- * reported apart, as step 0.
+ * reported apart, as step 0. A rule whose hazards an attending person mitigates
+ * ({@link HazardCheck#mitigatedByAttendance()}) has its hazards of a station attended at
+ * the step (plan {@code attend} steps) marked mitigated: listed, not counted as critical;
+ * one mitigated at a step and no longer at the next is new again at the next.
  *
  * <p>Customer-hours of a phase: the sum over its steps of services off after the step
  * times the step's hours. A step's hours are its duration when given; the phase's
@@ -79,8 +82,9 @@ public final class PlanEvaluation {
             return gasOffExtent.get();
         }
 
+        /** True when a hazard new at this step is critical and not mitigated. */
         public boolean hasCritical() {
-            return hazards.stream().anyMatch(h -> h.severity() == Severity.CRITICAL);
+            return hazards.stream().anyMatch(Hazard::critical);
         }
     }
 
@@ -138,8 +142,10 @@ public final class PlanEvaluation {
         FeedTrace.Result baseTrace = FeedTrace.run(baseSegs, Progress.NONE);
         BitSet baseFed = baseTrace.fedServices();
         BitSet baseLive = baseTrace.liveEdges();
-        List<Hazard> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, baseSegs, settings));
+        List<Hazard> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, baseSegs, settings), null);
         Set<String> active = keys(recorded);
+        Set<String> activeMitigated = new HashSet<>();
+        org.shutline.plan.Attendance attendance = org.shutline.plan.Attendance.of(ps.plan());
         FeedTrace.Result prevTrace = baseTrace;
         ValveSegments prevSegs = baseSegs;
         BitSet prevOff = new BitSet();
@@ -150,11 +156,15 @@ public final class PlanEvaluation {
             ValveSegments segs = ValveSegments.build(st.after());
             FeedTrace.Result tr = FeedTrace.run(segs, Progress.NONE);
             StepContext ctx = new StepContext(st, base, baseTrace, prevTrace, tr, segs, settings);
-            List<Hazard> all = run(checks, ctx);
+            List<Hazard> all = run(checks, ctx, attendance);
             List<Hazard> fresh = new ArrayList<>();
             List<Hazard> cont = new ArrayList<>();
-            for (Hazard h : all) (active.contains(h.key()) ? cont : fresh).add(h);
+            for (Hazard h : all) {
+                boolean was = active.contains(h.key()) && !(activeMitigated.contains(h.key()) && !h.mitigated());
+                (was ? cont : fresh).add(h);
+            }
             active = keys(all);
+            activeMitigated = mitigatedKeys(all);
             BitSet off = (BitSet) baseFed.clone();
             off.andNot(tr.fedServices());
             Suggestion sug = Suggestions.forStep(st, prevSegs, settings);
@@ -176,15 +186,36 @@ public final class PlanEvaluation {
         return new Result(ps, recorded, out, phases(ps, out));
     }
 
-    private static List<Hazard> run(List<HazardCheck> checks, StepContext ctx) {
+    private static List<Hazard> run(List<HazardCheck> checks, StepContext ctx, org.shutline.plan.Attendance attendance) {
         List<Hazard> out = new ArrayList<>();
-        for (HazardCheck c : checks) out.addAll(c.check(ctx));
+        for (HazardCheck c : checks) {
+            for (Hazard h : c.check(ctx)) {
+                if (attendance != null && c.mitigatedByAttendance()) h = mitigate(h, ctx, attendance);
+                out.add(h);
+            }
+        }
         return out;
+    }
+
+    /** The hazard marked mitigated when one of its features is a station attended at this step. */
+    private static Hazard mitigate(Hazard h, StepContext ctx, org.shutline.plan.Attendance attendance) {
+        for (String f : h.features()) {
+            int by = attendance.attendStep(ctx.stepNumber(), f);
+            if (by > 0) return h.withMitigation("station " + f + " attended by a qualified person able to shut it down (attend step " + by + ")");
+        }
+        return h;
     }
 
     private static Set<String> keys(List<Hazard> hs) {
         Set<String> k = new HashSet<>();
         for (Hazard h : hs) k.add(h.key());
+        return k;
+    }
+
+    /** Keys of the mitigated hazards: one mitigated at a step and not at the next is new again there (the attendance ended). */
+    private static Set<String> mitigatedKeys(List<Hazard> hs) {
+        Set<String> k = new HashSet<>();
+        for (Hazard h : hs) if (h.mitigated()) k.add(h.key());
         return k;
     }
 

@@ -5,7 +5,6 @@ import java.util.BitSet;
 import java.util.Comparator;
 import java.util.List;
 import org.shutline.analysis.hazard.StepContext;
-import org.shutline.model.Operability;
 import org.shutline.plan.StepAction;
 import org.shutline.plan.StepState;
 import org.shutline.trace.NetworkState;
@@ -16,8 +15,8 @@ import org.shutline.trace.ValveSegments;
  * Suggested operating order for a {@code close} step whose valves are listed without
  * order ({@code ordered: false}): upstream feeds first, by the hop distance from the
  * sources, in the segment graph of the state before the step, of the nearer side of
- * each valve; ties by valve id. For each listed valve that is unknown or past its
- * inspection interval, the fallback: the segments the step cuts off, grown across that
+ * each valve; ties by valve id. For each listed valve that is doubtful by
+ * {@link ValveDoubt}, the fallback: the segments the step cuts off, grown across that
  * valve to its far side, isolated again with {@link Isolation}; its extra valves and
  * the services this adds. The suggestion is checked by {@link InstructionCheck} before
  * it is returned (a mismatch throws {@link UnverifiedInstructionException}).
@@ -52,12 +51,12 @@ final class Suggestions {
         if (!zone.isEmpty()) {
             BitSet offStep = new BitSet();
             for (int g = zone.nextSetBit(0); g >= 0; g = zone.nextSetBit(g + 1)) for (int i : segs.services(g)) offStep.set(i);
-            Isolation iso = new Isolation(segs, new Isolation.Options(settings.asOf(), settings.inspectionInterval(), true));
+            Isolation iso = new Isolation(segs, Isolation.Options.of(settings.doubt()));
             for (int v : valves) {
                 int l = sg.valveLink(v);
                 if (l < 0) continue;
-                boolean doubtful = s.valveOperability(v) == Operability.UNKNOWN || overdue(s, v, settings);
-                if (!doubtful) continue;
+                ValveDoubt.Verdict doubt = ValveDoubt.of(s, v, settings.doubt());
+                if (!doubt.doubtful()) continue;
                 BitSet grown = (BitSet) zone.clone();
                 grown.set(sg.linkA(l));
                 grown.set(sg.linkB(l));
@@ -72,7 +71,7 @@ final class Suggestions {
                     addIds.add(s.network().services().get(i).id());
                     meters += s.network().services().get(i).meters();
                 }
-                String why = s.valveOperability(v) == Operability.UNKNOWN ? "operability unknown" : "past its inspection interval";
+                String why = doubt.why();
                 fallbacks.add(new Isolation.Fallback(s.valveId(v), why, r.isolable(), r.valveIds(), thenClose, addIds, meters,
                         r.stationsToStop(), r.sourcesInRegion()));
             }
@@ -80,12 +79,6 @@ final class Suggestions {
         PlanEvaluation.Suggestion sug = new PlanEvaluation.Suggestion(order, fallbacks);
         new InstructionCheck(segs).suggestion(order, sug, "plan step " + st.step().number() + " (" + st.step().describe() + ")");
         return sug;
-    }
-
-    private static boolean overdue(NetworkState s, int v, StepContext.Settings settings) {
-        if (v >= s.graph().valveCount()) return false;
-        java.time.LocalDate c = s.valveChecked(v);
-        return c == null || c.plus(settings.inspectionInterval()).isBefore(settings.asOf());
     }
 
     private static int valveIndex(NetworkState s, String id) {

@@ -270,6 +270,12 @@ final class EmergencyReport {
                     .append(f.fromSystem()).append(": stop it: ")
                     .append(stop.valves().isEmpty() ? "no valve to close" : "close " + String.join(", ", stop.valves()))
                     .append(stop.stoppable() ? "" : " (valves alone cannot stop it)").append('\n');
+            for (org.shutline.model.Station st : net.stations()) {
+                if (st.id().equals(f.id())) {
+                    sb.append("    ").append(org.shutline.analysis.OverpressureLimit.judge(net, st, org.shutline.model.PressureUnit.KPA,
+                            org.shutline.analysis.OverpressureLimit.DEFAULT_LOW_PRESSURE_LIMIT)).append('\n');
+                }
+            }
             if (!stop.note().isEmpty()) sb.append("    ").append(stop.note()).append('\n');
             sb.append("    this also ").append(stop.alsoStopped().isEmpty() ? "stops no other station"
                     : "stops station " + String.join(", ", stop.alsoStopped()))

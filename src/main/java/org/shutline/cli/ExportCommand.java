@@ -122,7 +122,7 @@ public final class ExportCommand implements Callable<Integer> {
         if (bad != null) return NetworkInput.badInput(err, bad);
         ReportBuilder.Options opts = options();
         Isolation.Options iso = new Isolation.Options(asOf == null ? LocalDate.now() : asOf,
-                Period.ofMonths(inspectionMonths), true);
+                Period.ofMonths(inspectionMonths));
         ReportBuilder rb;
         try {
             if (where.plan != null) {

@@ -122,7 +122,7 @@ public final class PlanCommand implements Callable<Integer> {
 
     static String hazardCodes(List<Hazard> hs) {
         List<String> s = new ArrayList<>();
-        for (Hazard h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + ")");
+        for (Hazard h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + (h.mitigated() ? ", mitigated" : "") + ")");
         return String.join("; ", s);
     }
 
@@ -170,7 +170,7 @@ public final class PlanCommand implements Callable<Integer> {
                 }
             }
         }
-        long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(h -> h.severity() == Severity.CRITICAL).count();
+        long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(Hazard::critical).count();
         sb.append('\n').append(crit == 0 ? "Result: no critical hazard raised by the plan (exit 0)."
                 : "Result: " + crit + " critical hazard(s) raised by the plan (exit 1).").append('\n');
         sb.append('\n').append(Caution.TEXT).append('\n');
@@ -180,6 +180,7 @@ public final class PlanCommand implements Callable<Integer> {
     private static void hazard(StringBuilder sb, Hazard h) {
         sb.append("  [").append(Words.word(h.severity()).toUpperCase(Locale.ROOT)).append("] ").append(h.code()).append(": ")
                 .append(h.message()).append("\n    action: ").append(h.action()).append('\n');
+        if (h.mitigated()) sb.append("    mitigated: ").append(h.mitigatedBy()).append('\n');
     }
 
     static ObjectNode hazardJson(ArrayNode a, Hazard h) {
@@ -194,6 +195,7 @@ public final class PlanCommand implements Callable<Integer> {
         }
         o.put("message", h.message());
         o.put("action", h.action());
+        if (h.mitigated()) o.put("mitigated_by", h.mitigatedBy());
         return o;
     }
 
@@ -271,8 +273,8 @@ public final class PlanCommand implements Callable<Integer> {
         for (Hazard h : all) {
             rows.add(List.of(Integer.toString(h.step()), h.code(), Words.word(h.severity()), String.join(" ", h.features()),
                     Double.isNaN(h.x()) ? "" : String.format(Locale.ROOT, "%.2f", h.x()), Double.isNaN(h.y()) ? "" : String.format(Locale.ROOT, "%.2f", h.y()),
-                    h.message(), h.action()));
+                    h.message(), h.action(), h.mitigated() ? h.mitigatedBy() : ""));
         }
-        return Csv.format(List.of("step", "code", "severity", "features", "x", "y", "message", "action"), rows);
+        return Csv.format(List.of("step", "code", "severity", "features", "x", "y", "message", "action", "mitigated_by"), rows);
     }
 }

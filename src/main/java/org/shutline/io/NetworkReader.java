@@ -120,7 +120,8 @@ public final class NetworkReader {
         List<Station> out = new ArrayList<>(rows.size());
         for (LayerDecoder.Row r : rows) {
             out.add(new Station(r.id(), r.get(s, "in_sys"), r.get(s, "out_sys"), r.get(s, "set_kpa"),
-                    r.get(s, "monitor_kpa"), r.get(s, "relief_kpa"), r.get(s, "name"), (Point) r.geometry()));
+                    r.get(s, "monitor_kpa"), r.get(s, "relief_kpa"), r.get(s, "name"), (Point) r.geometry(),
+                    ((Schema.YesNo) r.get(s, "relief_full")).value()));
         }
         return out;
     }

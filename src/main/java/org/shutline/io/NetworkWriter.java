@@ -110,7 +110,7 @@ public final class NetworkWriter {
     static WriteLayer stations(List<Station> s) {
         return new WriteLayer("stations", GeometryKind.POINT,
             cols("station_id", TEXT, "in_sys", TEXT, "out_sys", TEXT, "set_kpa", REAL, "monitor_kpa", REAL,
-                "relief_kpa", REAL, "name", TEXT),
+                "relief_kpa", REAL, "name", TEXT, "relief_full", TEXT),
             s.size(), i -> s.get(i).geometry(), (i, c) -> {
                 Station x = s.get(i);
                 return switch (c) {
@@ -120,7 +120,8 @@ public final class NetworkWriter {
                     case 3 -> x.setKpa();
                     case 4 -> x.monitorKpa();
                     case 5 -> x.reliefKpa();
-                    default -> x.name();
+                    case 6 -> x.name();
+                    default -> x.reliefFull() == null ? null : x.reliefFull() ? "yes" : "no";
                 };
             });
     }

@@ -19,6 +19,16 @@ import org.shutline.model.ValveKind;
 final class Schema {
     private Schema() {}
 
+    /** A yes/no field; empty or not given is {@link #UNKNOWN}. */
+    enum YesNo {
+        YES, NO, UNKNOWN;
+        public static final YesNo DEFAULT = UNKNOWN;
+
+        Boolean value() {
+            return this == UNKNOWN ? null : this == YES;
+        }
+    }
+
     /** Field value types of the data model. */
     enum Type { TEXT, REAL, INT, DATE, WORD }
 
@@ -66,7 +76,8 @@ final class Schema {
             Field.of("checked", Type.DATE)));
     static final Layer STATIONS = new Layer("stations", Shape.POINT, List.of(
             Field.key("station_id"), Field.key("in_sys"), Field.key("out_sys"), Field.of("set_kpa", Type.REAL),
-            Field.of("monitor_kpa", Type.REAL), Field.of("relief_kpa", Type.REAL), Field.of("name", Type.TEXT)));
+            Field.of("monitor_kpa", Type.REAL), Field.of("relief_kpa", Type.REAL), Field.of("name", Type.TEXT),
+            Field.word("relief_full", YesNo.class)));
     static final Layer SENSE_TAPS = new Layer("sense_taps", Shape.POINT, List.of(
             Field.key("tap_id"), Field.key("station_id"), Field.word("device", TapDevice.class)));
     static final Layer SERVICES = new Layer("services", Shape.POINT, List.of(

@@ -125,6 +125,9 @@ public final class PlanApplier {
             int i = stationIndex.get(so.station());
             if (!c.state.stationInService(i)) c.notice("station " + so.station() + " was already out of service");
             c.state = c.state.withStationInService(i, false);
+        } else if (a instanceof StepAction.Attend at) {
+            int i = stationIndex.get(at.station());
+            if (!c.state.stationInService(i)) c.notice("station " + at.station() + " is out of service at this step");
         } else if (a instanceof StepAction.StationIn si) {
             int i = stationIndex.get(si.station());
             if (c.state.stationInService(i)) c.notice("station " + si.station() + " was already in service");

@@ -52,6 +52,13 @@ public final class PlanValidator {
                 c.in(mains, m.main(), "main");
             } else if (a instanceof StepAction.StationOut so) c.in(stations, so.station(), "station");
             else if (a instanceof StepAction.StationIn si) c.in(stations, si.station(), "station");
+            else if (a instanceof StepAction.Attend at) {
+                c.in(stations, at.station(), "station");
+                int last = plan.steps().size();
+                if (at.until() != null && (at.until() < s.number() || at.until() > last)) {
+                    c.fail("until: step " + at.until() + " is not between this step (" + s.number() + ") and the last step (" + last + ")");
+                }
+            }
         }
         return List.copyOf(out);
     }

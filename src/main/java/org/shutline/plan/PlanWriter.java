@@ -96,6 +96,9 @@ public final class PlanWriter {
         }
         if (a instanceof StepAction.StationOut s) return text(s.station());
         if (a instanceof StepAction.StationIn s) return text(s.station());
+        if (a instanceof StepAction.Attend s) {
+            return s.until() == null ? text(s.station()) : "{ station: " + text(s.station()) + ", until: " + s.until() + " }";
+        }
         throw new IllegalArgumentException("unknown step kind " + a);
     }
 

@@ -73,4 +73,13 @@ public sealed interface StepAction {
     record StationIn(String station) implements StepAction {
         public String key() { return "station_in"; }
     }
+
+    /**
+     * A qualified person attends station {@code station}, able to shut it down and watching
+     * its outlet pressure, from this step through step {@code until} (null: to the end of
+     * this step's phase). Changes nothing in the network.
+     */
+    record Attend(String station, Integer until) implements StepAction {
+        public String key() { return "attend"; }
+    }
 }

@@ -9,7 +9,7 @@ import org.yaml.snakeyaml.nodes.ScalarNode;
 /** The step kinds of the plan file and how each one's value is read. */
 final class StepKinds {
     static final Set<String> KEYS = Set.of("close", "open", "cut", "tie_in", "activate", "abandon",
-            "bypass_install", "bypass_remove", "transfer", "move_tap", "station_out", "station_in");
+            "bypass_install", "bypass_remove", "transfer", "move_tap", "station_out", "station_in", "attend");
 
     private final PlanReader r;
 
@@ -49,6 +49,20 @@ final class StepKinds {
                     services = r.ids(s, "transfer.services");
                 }
                 return new StepAction.TransferServices(r.requiredText(m, "from", v), r.requiredText(m, "to", v), services);
+            }
+            case "attend": {
+                if (v instanceof ScalarNode) return new StepAction.Attend(r.scalar(v, "attend"), null);
+                Map<String, Node> m = r.mapping(v, "attend", Set.of("station", "until"));
+                Integer until = null;
+                if (m.containsKey("until")) {
+                    String u = r.scalar(m.get("until"), "attend.until");
+                    try {
+                        until = Integer.valueOf(u.trim());
+                    } catch (NumberFormatException e) {
+                        throw r.error(PlanReader.line(m.get("until")), "attend.until must be a step number, not '" + u + "'");
+                    }
+                }
+                return new StepAction.Attend(r.requiredText(m, "station", v), until);
             }
             case "move_tap": {
                 Map<String, Node> m = r.mapping(v, "move_tap", Set.of("tap", "to", "at"));

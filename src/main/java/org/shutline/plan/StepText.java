@@ -27,6 +27,9 @@ final class StepText {
         }
         if (a instanceof StepAction.StationOut s) return "take station " + s.station() + " out of service";
         if (a instanceof StepAction.StationIn s) return "return station " + s.station() + " to service";
+        if (a instanceof StepAction.Attend s) {
+            return "attend station " + s.station() + (s.until() == null ? " to the end of the phase" : " until step " + s.until());
+        }
         throw new IllegalArgumentException("unknown step kind " + a);
     }
 

@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.shutline.analysis.GasOffExtent;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.ValveDoubt;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
 import org.shutline.model.Operability;
@@ -80,8 +81,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
      * suggested order, with the suggestion's fallbacks; the valves of an {@code open}
      * step in the listed order; no valves for other kinds of step.
      *
-     * A valve is past its inspection interval by {@code options} (a valve never checked
-     * counts as past it when the options say so).
+     * A valve is past its inspection by the one rule, {@link ValveDoubt}, with {@code options}.
      *
      * @throws IllegalArgumentException when the plan has no such step
      */
@@ -127,7 +127,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
             if (v == null) continue;
             double[] xy = valvePoint(s, v);
             out.add(new OperatedValve(out.size() + 1, id, xy[0], xy[1], close, s.valveKind(v), s.valveOperability(v),
-                    s.valveChecked(v), overdue(s.valveChecked(v), opt), fallbacks.getOrDefault(id, List.of())));
+                    s.valveChecked(v), ValveDoubt.of(s, v, opt.doubt()).overdue(), fallbacks.getOrDefault(id, List.of())));
         }
         return out;
     }
@@ -192,11 +192,6 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
     public static ReportView ofState(NetworkState state, String subject) {
         return new ReportView(Kind.STATE, subject == null ? "Network map" : subject, "", 0, state, null, List.of(),
                 new BitSet(), List.of(), null, FeedTrace.run(state));
-    }
-
-    static boolean overdue(LocalDate checked, Isolation.Options o) {
-        if (checked == null) return o.neverCheckedIsOverdue();
-        return checked.plus(o.inspectionInterval()).isBefore(o.asOf());
     }
 
     static Map<String, Integer> valveIndex(NetworkState s) {

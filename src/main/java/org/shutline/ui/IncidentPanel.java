@@ -84,7 +84,7 @@ final class IncidentPanel extends JPanel {
 
     private synchronized Isolation isolationFor(Workspace ws) {
         if (isolationFor != ws) {
-            isolation = new Isolation(ws.segments(), new Isolation.Options(LocalDate.now(), Isolation.DEFAULT_INSPECTION_INTERVAL, true));
+            isolation = new Isolation(ws.segments(), Isolation.Options.defaults(LocalDate.now()));
             isolationFor = ws;
         }
         return isolation;

@@ -98,15 +98,11 @@ class IsolationTest {
         assertThat(r.valves().get(0).overdue()).isTrue();
         assertThat(r.fallbacks()).extracting(Isolation.Fallback::valveId).containsExactly("V2", "V4");
         Isolation.Fallback f2 = r.fallbacks().get(0);
-        assertThat(f2.why()).startsWith("inspection overdue");
+        assertThat(f2.why()).startsWith("last checked 2025-01-01, more than 15 months");
         assertThat(f2.valves()).containsExactly("V1");
         assertThat(f2.addedServices()).containsExactly("s2", "s4", "s5");
-        assertThat(r.fallbacks().get(1).why()).isEqualTo("never checked");
+        assertThat(r.fallbacks().get(1).why()).startsWith("never checked");
 
-        Isolation lenient = new Isolation(ValveSegments.build(t.state()),
-                new Isolation.Options(LocalDate.of(2026, 12, 1), Isolation.DEFAULT_INSPECTION_INTERVAL, false));
-        assertThat(lenient.isolate(Zone.point(120, 0)).fallbacks()).extracting(Isolation.Fallback::valveId)
-                .containsExactly("V2");
         Isolation early = new Isolation(ValveSegments.build(t.state()), Isolation.Options.defaults(LocalDate.of(2026, 3, 1)));
         assertThat(early.isolate(Zone.point(120, 0)).fallbacks()).extracting(Isolation.Fallback::valveId)
                 .containsExactly("V4");

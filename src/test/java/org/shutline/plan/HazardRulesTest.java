@@ -106,9 +106,16 @@ class HazardRulesTest {
 
     @Test
     void stationWithoutMonitorOrReliefIsRecordedOnce() throws PlanException {
-        // RS-1 has relief, RS-2 a monitor: nothing. Taking neither away, no finding; the rule reads the records.
+        // RS-2 has a monitor: nothing. RS-1 has only a relief whose capacity is not recorded (relief_full empty):
+        // a relief limits an over-pressure only when full-capacity (49 CFR 192.201(a)), so it warns, once, as recorded.
         PlanEvaluation.Result r = run(PlanNet.build(TAP_ON_A), "      - open: V-1\n");
-        assertThat(r.recordedHazards()).noneMatch(h -> h.code().equals("no-secondary-protection"));
+        assertThat(r.recordedHazards()).filteredOn(h -> h.code().equals("no-secondary-protection")).singleElement()
+                .satisfies(h -> {
+                    assertThat(h.features()).containsExactly("RS-1");
+                    assertThat(h.severity()).isEqualTo(Severity.WARNING);
+                    assertThat(h.message()).contains("unrecorded capacity");
+                });
+        assertThat(at(r, 1, "no-secondary-protection")).isEmpty();
         assertThat(new org.shutline.analysis.hazard.SecondaryProtectionCheck().description()).isNotBlank();
     }
 
@@ -166,7 +173,7 @@ class HazardRulesTest {
         assertThat(at(unknown, 2, "work-zone")).singleElement().satisfies(h -> {
             assertThat(h.severity()).isEqualTo(Severity.WARNING);
             assertThat(h.features()).containsExactly("LP-B", "V-2");
-            assertThat(h.message()).contains("unknown condition");
+            assertThat(h.message()).contains("operability unknown");
         });
         PlanEvaluation.Result no = run(PlanNet.build(Operability.NO, TAP_ON_A),
                 "      - close: [V-1, V-2]\n      - cut: { main: LP-B, at: [200, 0] }\n");
@@ -189,7 +196,7 @@ class HazardRulesTest {
         assertThat(at(onTime, 2, "work-zone")).isEmpty();
         PlanEvaluation.Result late = PlanEvaluation.evaluate(ps, HazardChecks.discover(),
                 StepContext.Settings.defaults(LocalDate.of(2027, 9, 2)), 12, Progress.NONE);
-        assertThat(at(late, 2, "work-zone")).hasSize(2).allSatisfy(h -> assertThat(h.message()).contains("15 months"));
+        assertThat(at(late, 2, "work-zone")).hasSize(2).allSatisfy(h -> assertThat(h.message()).contains("15 months").contains("192.747"));
     }
 
     @Test

@@ -66,6 +66,11 @@ final class PlanNet {
     }
 
     static Topology build(Operability v2, List<SenseTap> taps) {
+        return build(v2, taps, null);
+    }
+
+    /** With RS-1's relief recorded as full-capacity ({@code true}), token ({@code false}) or not recorded (null). */
+    static Topology build(Operability v2, List<SenseTap> taps, Boolean rs1ReliefFull) {
         List<Main> mains = List.of(
                 main("IP-1", "IP", line(0, 100, 400, 100)),
                 main("LP-A", "LP", line(100, 99, 100, 0)),
@@ -76,7 +81,7 @@ final class PlanNet {
                 new Valve("V-1", "LP", ValveKind.MAIN, NormalPosition.OPEN, Operability.YES, CHECKED, pt(150, 0)),
                 new Valve("V-2", "LP", ValveKind.MAIN, NormalPosition.OPEN, v2, CHECKED, pt(250, 0)));
         List<Station> stations = List.of(
-                new Station("RS-1", "IP", "LP", 1.74, null, 3.0, "Mill Road", pt(100, 100)),
+                new Station("RS-1", "IP", "LP", 1.74, null, 3.0, "Mill Road", pt(100, 100), rs1ReliefFull),
                 new Station("RS-2", "IP", "LP", 1.74, 2.5, null, "Fern Hill", pt(400, 100)));
         List<Service> services = new ArrayList<>(List.of(
                 new Service("S-1", "LP", ServiceClass.RESIDENTIAL, 1, "", null, "1 Tansy Walk", pt(200, 10)),

@@ -59,12 +59,24 @@ class SamplePlanTest {
     @Test
     void correctedPlanRaisesNoHazardAndKeepsTheCareHomeOnGas() throws Exception {
         PlanEvaluation.Result r = evaluate("tallowmere-plan-corrected.yaml");
-        assertThat(r.steps()).hasSize(15);
-        assertThat(r.steps()).allSatisfy(s -> assertThat(s.hazards()).as("step " + s.step().number()).isEmpty());
+        assertThat(r.steps()).hasSize(16);
+        // step 8 attends ST-S1 through step 9, the tap move: the move-tap hazard (critical: ST-S1 has no monitor
+        // and no relief) is listed at step 9 and marked mitigated; the transfer at step 12 interrupts 6 services.
+        // Nothing else is raised.
+        assertThat(r.steps().get(7).step().action()).isInstanceOf(StepAction.Attend.class);
+        assertThat(r.steps().get(8).hazards()).singleElement().satisfies(h -> {
+            assertThat(h.code()).isEqualTo("move-tap");
+            assertThat(h.severity()).isEqualTo(Severity.CRITICAL);
+            assertThat(h.mitigatedBy()).contains("ST-S1").contains("attend step 8");
+        });
+        assertThat(r.steps().get(11).hazards()).extracting(h -> h.code()).containsExactly("service-transfer");
+        for (PlanEvaluation.StepResult s : r.steps()) {
+            if (s.step().number() != 9 && s.step().number() != 12) assertThat(s.hazards()).as("step " + s.step().number()).isEmpty();
+        }
         assertThat(r.hasCritical()).isFalse();
         assertThat(r.steps()).allSatisfy(s -> assertThat(s.criticalOff()).isEmpty());
         // at the end every customer of the old main is on the new one and on gas
-        assertThat(r.steps().get(14).servicesOff()).isZero();
+        assertThat(r.steps().get(15).servicesOff()).isZero();
         // the tie-ins were made on isolated pipe: the junction isolation puts only what lies between the valves off
         assertThat(r.steps().get(1).servicesOff()).isLessThanOrEqualTo(2);
         assertThat(r.steps().get(0).suggestion().order()).containsExactlyInAnyOrder("V-TAN-N", "V-TAN-S", "V-ELD-W", "V-CI-W");

@@ -15,4 +15,13 @@ public interface HazardCheck {
     String description();
 
     List<Hazard> check(StepContext ctx);
+
+    /**
+     * True when a qualified person attending a station (able to shut it down, watching its
+     * outlet pressure: the plan's {@code attend} step) mitigates this rule's hazards of that
+     * station (a hazard is of a station when its features name it). Default false.
+     */
+    default boolean mitigatedByAttendance() {
+        return false;
+    }
 }

@@ -22,7 +22,17 @@ public final class SecondaryProtectionCheck implements HazardCheck {
         List<Hazard> out = new ArrayList<>();
         for (int i = 0; i < ctx.network().stations().size(); i++) {
             Station st = ctx.network().stations().get(i);
-            if (st.hasSecondaryProtection() || !ctx.after().stationInService(i)) continue;
+            if (!ctx.after().stationInService(i)) continue;
+            if (st.monitorKpa() == null && st.reliefKpa() != null && !st.hasFullRelief()) {
+                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
+                        "Station " + st.id() + TapOnDeadMainCheck.label(st) + " has no monitor and a relief of "
+                                + (st.reliefFull() == null ? "unrecorded" : "token") + " capacity (relief_full not yes): "
+                                + "it may not limit a failed-open regulator's flow into " + st.outSys() + ".",
+                        "Confirm the relief's capacity against the regulator's full flow (49 CFR 192.201) and record relief_full; "
+                                + "until then staff the station during work that affects its sensing."));
+                continue;
+            }
+            if (st.hasSecondaryProtection()) continue;
             out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
                     "Station " + st.id() + TapOnDeadMainCheck.label(st) + " has no monitor regulator or relief device recorded: "
                             + "a regulator failure would pass inlet pressure into " + st.outSys() + ".",

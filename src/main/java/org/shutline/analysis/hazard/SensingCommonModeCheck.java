@@ -18,6 +18,8 @@ import org.shutline.trace.ValveSegments;
 public final class SensingCommonModeCheck implements HazardCheck {
     @Override public String code() { return "sensing-common-mode"; }
 
+    @Override public boolean mitigatedByAttendance() { return true; }
+
     @Override public String description() {
         return "worker and monitor sense at one tap or one valve segment";
     }

@@ -5,7 +5,9 @@ import java.time.Period;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.model.Network;
-import org.shutline.model.Operability;
+import org.shutline.analysis.OverpressureLimit;
+import org.shutline.analysis.ValveDoubt;
+import org.shutline.model.Pressure;
 import org.shutline.model.PressureUnit;
 import org.shutline.model.SenseTap;
 import org.shutline.plan.StepState;
@@ -20,12 +22,36 @@ import org.shutline.trace.ValveSegments;
  * inspection interval for valve checks, pressure unit for messages).
  */
 public final class StepContext {
-    /** Settings shared by all rules. */
-    public record Settings(LocalDate asOf, Period inspectionInterval, PressureUnit pressureUnit) {
-        public static Settings defaults(LocalDate asOf) {
-            return new Settings(asOf, Period.ofMonths(15), PressureUnit.KPA);
+    /**
+     * Settings shared by all rules: the doubtful-valve rule's settings ({@link ValveDoubt}),
+     * the pressure unit for messages, the limit taken for a low-pressure distribution
+     * system under 49 CFR 192.201(a)(1) (default 0.5 psig: common practice), and the
+     * distance within which a cut or tie-in may damage a sensing line (default 10 m:
+     * common practice).
+     */
+    public record Settings(ValveDoubt.Settings doubt, PressureUnit pressureUnit, Pressure lowPressureLimit, double sensingLineM) {
+        public Settings {
+            java.util.Objects.requireNonNull(doubt, "doubt");
+            java.util.Objects.requireNonNull(pressureUnit, "pressureUnit");
+            java.util.Objects.requireNonNull(lowPressureLimit, "lowPressureLimit");
         }
+
+        /** The defaults for the rest, with this valve-doubt date and interval and unit. */
+        public Settings(LocalDate asOf, Period inspectionInterval, PressureUnit pressureUnit) {
+            this(new ValveDoubt.Settings(asOf, inspectionInterval), pressureUnit, OverpressureLimit.DEFAULT_LOW_PRESSURE_LIMIT,
+                    DEFAULT_SENSING_LINE_M);
+        }
+
+        public static Settings defaults(LocalDate asOf) {
+            return new Settings(asOf, ValveDoubt.INTERVAL, PressureUnit.KPA);
+        }
+
+        public LocalDate asOf() { return doubt.asOf(); }
+        public Period inspectionInterval() { return doubt.interval(); }
     }
+
+    /** Default distance of a cut or tie-in from a sensing tap or its line that warns, in metres (common practice). */
+    public static final double DEFAULT_SENSING_LINE_M = 10.0;
 
     private final StepState step;
     private final NetworkState base;
@@ -105,15 +131,8 @@ public final class StepContext {
         return out;
     }
 
-    /** True when valve v is unknown or past its inspection interval (never checked counts as past). */
-    public boolean doubtful(NetworkState s, int v) {
-        if (s.valveOperability(v) == Operability.UNKNOWN) return true;
-        return overdue(s, v);
-    }
-
-    public boolean overdue(NetworkState s, int v) {
-        if (v >= s.graph().valveCount()) return false; // valves installed by the plan are new
-        LocalDate c = s.valveChecked(v);
-        return c == null || c.plus(settings.inspectionInterval()).isBefore(settings.asOf());
+    /** The verdict of the one doubtful-valve rule ({@link ValveDoubt}) on valve v of state s. */
+    public ValveDoubt.Verdict doubt(NetworkState s, int v) {
+        return ValveDoubt.of(s, v, settings.doubt());
     }
 }

@@ -2,6 +2,7 @@ package org.shutline.analysis.hazard;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.shutline.analysis.OverpressureLimit;
 import org.shutline.model.MainStatus;
 import org.shutline.model.Network;
 import org.shutline.model.SenseTap;
@@ -20,6 +21,8 @@ import org.shutline.trace.NetworkState;
  */
 public final class TapOnDeadMainCheck implements HazardCheck {
     @Override public String code() { return "tap-on-dead-main"; }
+
+    @Override public boolean mitigatedByAttendance() { return true; }
 
     @Override public String description() {
         return "station sensing tap on an abandoned, cut-away or dead main: the station opens wide";
@@ -61,7 +64,8 @@ public final class TapOnDeadMainCheck implements HazardCheck {
                 + " (" + tap.device().name().toLowerCase() + ") " + why + ". The station will sense no outlet pressure, open to full inlet pressure "
                 + Pressures.describe(ctx.network(), station.inSys(), ctx.settings().pressureUnit())
                 + " and over-pressure its outlet system " + Pressures.describe(ctx.network(), station.outSys(), ctx.settings().pressureUnit())
-                + ": " + atRisk + " services downstream at risk.";
+                + ": " + atRisk + " services downstream at risk. "
+                + OverpressureLimit.judge(ctx.network(), station, ctx.settings().pressureUnit(), ctx.settings().lowPressureLimit());
         String action = "Move sensing tap " + tap.id() + " to a live main of " + station.outSys() + " connected to the station outlet before "
                 + ctx.stepLabel() + "; otherwise staff station " + station.id()
                 + " with a qualified person able to shut it down, and watch its outlet pressure throughout " + ctx.stepLabel() + ".";

@@ -5,7 +5,6 @@ import java.util.BitSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
-import org.shutline.model.Operability;
 import org.shutline.model.Severity;
 import org.shutline.plan.WorkPoint;
 import org.shutline.topology.EdgeKind;
@@ -18,7 +17,7 @@ import org.shutline.trace.NetworkState;
  * main is an error (it needs a live-insertion procedure). When the point is dead, the
  * closed valves that keep gas off it are found (the closed valves on the edge of the
  * dead pipe around the point whose far side is live); relying on an inoperable one is
- * an error, on an unknown one or one past its inspection interval a warning.
+ * an error, on any other doubtful one ({@link org.shutline.analysis.ValveDoubt}) a warning.
  */
 public final class WorkZoneCheck implements HazardCheck {
     @Override public String code() { return "work-zone"; }
@@ -79,14 +78,14 @@ public final class WorkZoneCheck implements HazardCheck {
         }
         for (int v : closed) {
             String id = s.valveId(v);
-            if (s.valveOperability(v) == Operability.NO) {
+            var doubt = ctx.doubt(s, v);
+            if (doubt.inoperable()) {
                 out.add(new Hazard(code(), Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
                         "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
                                 + ", which is recorded inoperable and may not hold.",
                         "Do not rely on " + id + ": close the next valve beyond it, or repair it before the step."));
-            } else if (ctx.doubtful(s, v)) {
-                String why = s.valveOperability(v) == Operability.UNKNOWN ? "of unknown condition"
-                        : "past its inspection interval (" + ctx.settings().inspectionInterval().toTotalMonths() + " months, 49 CFR 192.747)";
+            } else if (doubt.doubtful()) {
+                String why = doubt.why();
                 out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
                         "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
                                 + ", which is " + why + ".",

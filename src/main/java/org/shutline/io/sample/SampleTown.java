@@ -265,7 +265,9 @@ public final class SampleTown {
 
     private void station(String id, String out, String name, Coordinate node, Coordinate at, Double mon, Double rel) {
         addMain("M-STUB-" + id.substring(3), out, MainStatus.ACTIVE, "steel", 150.0, LP_MAOP, 1990, line(at, node));
-        stations.add(new Station(id, "IP-1", out, LP_KPA, mon, rel, name, point(at.x, at.y)));
+        // ST-N1's relief is recorded full-capacity, ST-E1's as token capacity (relief_full no)
+        Boolean full = rel == null ? null : id.equals("ST-N1");
+        stations.add(new Station(id, "IP-1", out, LP_KPA, mon, rel, name, point(at.x, at.y), full));
         // inlet valve on IP-1, 1 m along the main from the station's projection: 1.80 m from the station
         boolean vertical = at.x == X0 + 998.5;
         Point v = vertical ? point(X0 + 997, at.y - 1) : point(at.x - 1, Y0 + 597);
