@@ -248,10 +248,8 @@ final class EmergencyReport {
     }
 
     static void fallbackText(StringBuilder sb, String indent, Isolation.Fallback f) {
-        sb.append(indent).append(f.valveId()).append(" (").append(f.why()).append("): then close ")
-                .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
-                .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
+        sb.append(indent).append("if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): ")
+                .append(org.shutline.report.ReportView.fallbackText(f)).append('\n');
     }
 
     static void routeText(StringBuilder sb, ValveRoute.Result r) {

@@ -187,7 +187,9 @@ public final class ExportCommand implements Callable<Integer> {
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         NetworkState base = NetworkState.of(t);
-        Isolation.Result r = new Isolation(ValveSegments.build(base), iso).isolate(zone);
+        // the same field order (crews' routes, doubtful valves first) and crews as `incident` with its defaults
+        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(ValveSegments.build(base), iso, zone,
+                org.shutline.analysis.ResponseSettings.DEFAULT);
         String subject = where.main != null ? "Incident on main " + where.main
                 : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],
                     system == null ? "" : " (" + system + ")");
