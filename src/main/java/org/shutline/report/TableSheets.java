@@ -48,7 +48,7 @@ public final class TableSheets {
         } finally {
             scratch.dispose();
         }
-        double usable = format.heightPt() - 2 * MARGIN - 40 - 36 - ROW;
+        double usable = format.heightPt() - 2 * MARGIN - 40 - 36 - ROW - 2 * LINE;
         List<List<Laid>> pages = new ArrayList<>();
         List<Laid> page = new ArrayList<>();
         double used = 0;
@@ -113,11 +113,16 @@ public final class TableSheets {
         if (subtitle != null) g.drawString(subtitle, (float) MARGIN, (float) (MARGIN + 26));
         double y = MARGIN + 44;
         g.setFont(bold);
+        FontMetrics hm = g.getFontMetrics();
         double x = MARGIN;
+        int headerLines = 1;
         for (int c = 0; c < widths.length; c++) {
-            g.drawString(header.get(c), (float) (x + 2), (float) y);
+            List<String> ls = wrapCell(header.get(c), hm, widths[c] - PAD);
+            headerLines = Math.max(headerLines, ls.size());
+            for (int k = 0; k < ls.size(); k++) g.drawString(ls.get(k), (float) (x + 2), (float) (y + k * LINE));
             x += widths[c];
         }
+        y += (headerLines - 1) * LINE;
         g.setStroke(new BasicStroke(0.6f));
         g.draw(new Line2D.Double(MARGIN, y + 3, w - MARGIN, y + 3));
         g.setFont(body);
@@ -142,24 +147,51 @@ public final class TableSheets {
         Footer.paint(g, w, h, MARGIN, "page " + page + " of " + pages);
     }
 
+    /**
+     * Widths: each column its widest cell (at most 45 % of the room), header included.
+     * When they do not fit, each column keeps at least its longest word (and its header's)
+     * and only the room above that is shrunk, proportionally; only when even the words do
+     * not fit is everything shrunk (long words are then broken).
+     */
     private static double[] columnWidths(Graphics2D g, List<String> header, List<List<String>> rows, Font body, Font bold, double avail) {
         int n = header.size();
         double[] w = new double[n];
+        double[] min = new double[n];
         FontMetrics fb = g.getFontMetrics(bold);
         FontMetrics fm = g.getFontMetrics(body);
-        for (int c = 0; c < n; c++) w[c] = fb.stringWidth(header.get(c)) + 10;
+        for (int c = 0; c < n; c++) {
+            w[c] = fb.stringWidth(header.get(c)) + PAD + 2;
+            min[c] = longestWord(header.get(c), fb) + PAD + 2;
+        }
         int sample = Math.min(rows.size(), 2000);
         for (int r = 0; r < sample; r++) {
             List<String> row = rows.get(r);
             for (int c = 0; c < n && c < row.size(); c++) {
                 String s = row.get(c) == null ? "" : row.get(c);
-                w[c] = Math.max(w[c], Math.min(fm.stringWidth(s) + 10, avail * 0.45));
+                w[c] = Math.max(w[c], Math.min(fm.stringWidth(s) + PAD + 2, avail * 0.45));
+                min[c] = Math.max(min[c], Math.min(longestWord(s, fm) + PAD + 2, avail * 0.45));
             }
         }
-        double sum = 0;
-        for (double x : w) sum += x;
-        if (sum > avail) for (int c = 0; c < n; c++) w[c] *= avail / sum;
+        double sum = 0, sumMin = 0;
+        for (int c = 0; c < n; c++) {
+            min[c] = Math.min(min[c], w[c]);
+            sum += w[c];
+            sumMin += min[c];
+        }
+        if (sum <= avail) return w;
+        if (sumMin <= avail) {
+            double f = (avail - sumMin) / (sum - sumMin);
+            for (int c = 0; c < n; c++) w[c] = min[c] + (w[c] - min[c]) * f;
+            return w;
+        }
+        for (int c = 0; c < n; c++) w[c] *= avail / sum;
         return w;
+    }
+
+    private static double longestWord(String s, FontMetrics fm) {
+        double m = 0;
+        for (String word : s.split(" ")) m = Math.max(m, fm.stringWidth(word));
+        return m;
     }
 
     /** The longest start of {@code s} that fits {@code width}, with "..." when cut (for one-line labels on maps, not for tables). */
