@@ -160,4 +160,20 @@ class FieldOrderCommandsTest {
                 "-where", "valve_id = 'V-026'");
         assertThat(v).contains("op_order (Integer) = 5").contains("crew (Integer) = 2").contains("if_fails (String) = " + V026);
     }
+
+    /* Cards: the over-pressure of LP-SOUTH (phases that touch it) stops ST-S1; its upstream V-004 is doubtful. */
+    @Test
+    void cardsGiveTheUpstreamFallbackInTextAndPdf() throws Exception {
+        Path cards = dir.resolve("cards");
+        CommandsTest.Run r = CommandsTest.run("cards", NET, "sample-gis/tallowmere-plan.yaml", "--out", cards.toString(),
+                "--as-of", "2026-12-01");
+        assertThat(r.code()).as(r.err()).isZero();
+        String fallback = "if V-004 will not close (operability unknown): close V-005; adds 0 services, 0 meters";
+        assertThat(r.out()).contains(fallback);
+        try (PDDocument doc = Loader.loadPDF(cards.resolve("emergency-cards.pdf").toFile())) {
+            String all = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertThat(all).contains("if V-004 will not close").contains("(operability unknown) close V-005; adds 0 services, 0 meters");
+            assertThat(all).doesNotContain("V-00...");
+        }
+    }
 }
