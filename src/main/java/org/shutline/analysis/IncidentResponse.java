@@ -19,9 +19,10 @@ import org.shutline.trace.ValveSegments;
  *     active pipe: the smallest isolable area containing it, grown only across
  *     inoperable valves), with operating order, per doubtful valve the fallback, and
  *     the alternative with fewer valves where there is one.</li>
- * <li>Time: {@link ValveRoute} over the listed valves (and separately over the
- *     alternative's), at the valves' positions in the network, lengths converted from
- *     the CRS unit to metres.</li>
+ * <li>Order and time: {@link ValveOrder} (crews' routes, doubtful valves first in each,
+ *     fallbacks joining the same crew's route) over the listed valves and the inlet
+ *     valves of stations to stop; {@link ValveRoute} separately over the alternative's
+ *     valves; positions in the network, lengths converted from the CRS unit to metres.</li>
  * <li>Work: {@link Restoration} over the services put off gas, with dead districts
  *     purged and relit whole.</li>
  * </ul>
@@ -33,9 +34,13 @@ public final class IncidentResponse {
     /** ERG Guide 115: initial isolation of at least 100 m (330 ft) in all directions. */
     public static final double INITIAL_ISOLATION_M = 100.0;
 
-    /** The answer; {@code alternativeRoute} is present when the isolation has an alternative. */
-    public record Result(Isolation.Result isolation, ValveRoute.Result route, Optional<ValveRoute.Result> alternativeRoute,
-                         Restoration.Result restoration, String systemId) {}
+    /**
+     * The answer; {@code order} is the field order of the valves (numbers, crews,
+     * fallbacks), {@code route} its route; {@code alternativeRoute} is present when the
+     * isolation has an alternative.
+     */
+    public record Result(Isolation.Result isolation, ValveOrder.Result order, ValveRoute.Result route,
+                         Optional<ValveRoute.Result> alternativeRoute, Restoration.Result restoration, String systemId) {}
 
     private IncidentResponse() {}
 
@@ -47,10 +52,10 @@ public final class IncidentResponse {
         after.andNot(r.region());
         after.andNot(r.unintended());
         Restoration.Result rest = Restoration.of(segs, before, after, r.servicesOff(), settings);
-        ValveRoute.Result route = ValveRoute.plan(stops(segs.state(), r.valveIds()), settings.crews(), settings.valves());
+        ValveOrder.Result order = ValveOrder.of(segs, iso, options, r, settings.withCrews(rest.sizing().crews()));
         Optional<ValveRoute.Result> alt = r.alternative()
-                .map(a -> ValveRoute.plan(stops(segs.state(), a.valves()), settings.crews(), settings.valves()));
-        return new Result(r, route, alt, rest, systemOf(segs, zone));
+                .map(a -> ValveRoute.plan(stops(segs.state(), a.valves()), rest.sizing().crews(), settings.valves()));
+        return new Result(r, order, order.route(), alt, rest, systemOf(segs, zone));
     }
 
     /** Valve positions (metres) in the order given; a valve id the state does not hold is a broken contract. */

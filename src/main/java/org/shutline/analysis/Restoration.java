@@ -73,7 +73,7 @@ public final class Restoration {
             if (all.get(i).isCritical()) critical.add(all.get(i).id());
         }
         ResponseSizing.Result sizing = ResponseSizing.size((int) shutMeters, (int) relightMeters, settings.targetHours(),
-                settings.relightTargetHours(), settings.crews(), settings.rates());
+                settings.relightTargetHours(), settings.crewsGiven() ? settings.crews() : 0, settings.rates());
         return new Result(List.copyOf(dead), servicesOff, relight, shutMeters, relightMeters, critical, !dead.isEmpty(), sizing);
     }
 

@@ -15,6 +15,7 @@ import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.OverpressureShutoff;
 import org.shutline.analysis.ResponseSettings;
+import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.ValveRoute;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
@@ -66,8 +67,8 @@ public final class CardsCommand implements Callable<Integer> {
     @Option(names = "--no-pdf", description = "do not write the PDF")
     private boolean noPdf;
 
-    @Option(names = "--crews", defaultValue = "2", description = "crews for the valve time (default: ${DEFAULT-VALUE})")
-    private int crews;
+    @Option(names = "--crews", paramLabel = "N", description = "crews (default: computed from the 4 h shut-off target, as incident)")
+    private Integer crews;
 
     @Option(names = "--pit-radius", defaultValue = "2", description = "radius in metres of the excavation around a cut or tie-in point (default: ${DEFAULT-VALUE})")
     private double pitRadius;
@@ -89,7 +90,7 @@ public final class CardsCommand implements Callable<Integer> {
         Topology t;
         ResponseSettings settings;
         try {
-            settings = ResponseSettings.DEFAULT.withCrews(crews);
+            settings = crews == null ? ResponseSettings.DEFAULT : ResponseSettings.DEFAULT.withCrews(crews);
             t = NetworkInput.load(network, mapping, Progress.NONE);
             Plan plan = PlanReader.read(planFile);
             ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
@@ -156,7 +157,7 @@ public final class CardsCommand implements Callable<Integer> {
             }
         }
         if (wp == null) return null;
-        org.shutline.report.ReportView view = org.shutline.report.ReportView.ofIncident(ps.afterPhase(c.phase()), c.site().isolation(),
+        org.shutline.report.ReportView view = org.shutline.report.ReportView.ofIncident(ps.afterPhase(c.phase()), c.site(),
                 "Emergency card: phase " + (c.phase() + 1) + " " + c.name() + ": gas blowing at the " + wp.kind() + " on " + wp.mainId(),
                 wp.x(), wp.y(), org.shutline.report.ReportView.ERG_115_ISOLATION_M, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M);
         return org.shutline.report.ReportBuilder.of(view, network, org.shutline.report.ReportBuilder.Options.defaults().withPage(pf)).mapSheet();
@@ -170,21 +171,18 @@ public final class CardsCommand implements Callable<Integer> {
             Isolation.Result iso = site.isolation();
             rows.add(List.of("GAS BLOWING AT THE EXCAVATION", iso.isolable() ? "close these valves in this order" : "NOT isolable by valves alone"));
             if (!iso.isolable()) rows.add(List.of("  why", iso.reason()));
-            var state = ps.afterPhase(c.phase());
-            for (Isolation.ValveStep v : iso.valves()) {
-                double[] xy = IncidentResponse.valveXY(state, v.valve());
-                rows.add(List.of("  " + v.order() + ". " + v.valveId(), "operable " + v.operable().name().toLowerCase(Locale.ROOT)
-                        + (v.overdue() ? ", past inspection interval" : "") + "; crew " + EmergencyReport.crewOf(site.route(), v.valveId())
-                        + (grid.reference(xy[0], xy[1]).isEmpty() ? "" : "; USNG " + grid.reference(xy[0], xy[1]))));
+            for (ValveOrder.Step v : site.order().steps()) {
+                rows.add(List.of("  " + v.order() + ". " + v.valveId(), "crew " + v.crew() + "; operable " + v.operable().name().toLowerCase(Locale.ROOT)
+                        + (v.overdue() ? ", past inspection interval" : "")
+                        + (grid.reference(v.x(), v.y()).isEmpty() ? "" : "; USNG " + grid.reference(v.x(), v.y()))
+                        + (v.stationInlet() ? "; station inlet (stops the station)" : "")));
+                if (v.fallback() != null) {
+                    rows.add(List.of("     if it will not close", "(" + v.fallback().why() + ") " + v.fallback().text()));
+                }
             }
             if (!iso.stationsToStop().isEmpty()) {
                 rows.add(List.of("  stop stations", String.join(", ", iso.stationsToStop()) + " (inlet valves "
                         + (iso.stationInletValves().isEmpty() ? "none recorded" : String.join(", ", iso.stationInletValves())) + ")"));
-            }
-            for (Isolation.Fallback f : iso.fallbacks()) {
-                rows.add(List.of("  if " + f.valveId() + " will not close", "(" + f.why() + ") close "
-                        + (f.thenClose().isEmpty() ? "nothing more" : String.join(", ", f.thenClose())) + "; adds "
-                        + f.addedServices().size() + " services" + (f.isolable() ? "" : "; valves alone then cannot isolate")));
             }
             iso.alternative().ifPresent(a -> rows.add(List.of("  fewer valves", String.join(", ", a.valves()) + " (adds "
                     + a.addedServices().size() + " services)")));
@@ -208,8 +206,7 @@ public final class CardsCommand implements Callable<Integer> {
                 rows.add(List.of("    also", (f.stop().alsoStopped().isEmpty() ? "stops no other station" : "stops " + String.join(", ", f.stop().alsoStopped()))
                         + "; " + f.stop().otherOff().cardinality() + " services off besides the station's own district"));
                 for (Isolation.Fallback x : f.upstream().fallbacks()) {
-                    rows.add(List.of("    if " + x.valveId() + " fails", "then close " + (x.thenClose().isEmpty() ? "nothing more" : String.join(", ", x.thenClose()))
-                            + "; adds " + x.addedServices().size() + " services" + (x.isolable() ? "" : "; valves alone then cannot stop it")));
+                    rows.add(List.of("    if " + x.valveId() + " will not close", "(" + x.why() + ") " + org.shutline.report.ReportView.fallbackText(x)));
                 }
             }
             rows.add(List.of("  at risk", op.atRisk().cardinality() + " services, " + op.atRiskMeters() + " meters; check each before relight"));

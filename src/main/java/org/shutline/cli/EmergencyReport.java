@@ -12,6 +12,7 @@ import org.shutline.analysis.StationStop;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ResponseSizing;
 import org.shutline.analysis.Restoration;
+import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.ValveRoute;
 import org.shutline.analysis.WorkPackages;
 import org.shutline.model.Network;
@@ -35,20 +36,22 @@ final class EmergencyReport {
         root.set("station_inlet_valves", Json.strings(iso.stationInletValves()));
         root.set("sources_in_region", Json.strings(iso.sourcesInRegion()));
         ArrayNode valves = root.putArray("valves_to_close");
-        for (Isolation.ValveStep v : iso.valves()) {
+        for (ValveOrder.Step v : r.order().steps()) {
             ObjectNode o = valves.addObject();
             o.put("order", v.order());
             o.put("valve", v.valveId());
             o.put("operable", v.operable().name().toLowerCase(Locale.ROOT));
             o.put("overdue", v.overdue());
-            o.put("crew", crewOf(r.route(), v.valveId()));
-            double[] xy = IncidentResponse.valveXY(s, v.valve());
-            o.put("x", round(xy[0], 2));
-            o.put("y", round(xy[1], 2));
-            o.put("usng", grid.reference(xy[0], xy[1]));
+            o.put("doubtful", v.doubtful());
+            o.put("station_inlet", v.stationInlet());
+            o.put("crew", v.crew());
+            o.put("x", round(v.x(), 2));
+            o.put("y", round(v.y(), 2));
+            o.put("usng", grid.reference(v.x(), v.y()));
+            if (v.fallback() != null) o.put("if_it_will_not_close", v.fallback().text());
         }
         ArrayNode fb = root.putArray("fallbacks");
-        for (Isolation.Fallback f : iso.fallbacks()) fallbackJson(fb.addObject(), f);
+        for (ValveOrder.Fallback f : r.order().fallbacks()) orderedFallbackJson(fb.addObject(), f);
         iso.alternative().ifPresent(a -> {
             ObjectNode o = root.putObject("alternative");
             o.set("valves", Json.strings(a.valves()));
@@ -63,6 +66,23 @@ final class EmergencyReport {
         root.put("unintended_segments", iso.unintended().cardinality());
         root.set("closed_boundary_valves", Json.strings(iso.closedBoundaryValves()));
         root.put("initial_isolation_m", IncidentResponse.INITIAL_ISOLATION_M);
+    }
+
+    static void orderedFallbackJson(ObjectNode o, ValveOrder.Fallback f) {
+        o.put("valve", f.valveId());
+        o.put("why", f.why());
+        o.put("crew", f.crew());
+        o.set("then_close", Json.strings(f.thenClose()));
+        o.put("extra_minutes", round(f.extraMinutes(), 1));
+        o.put("adds_services", f.addedServices());
+        o.put("adds_meters", f.addedMeters());
+        o.put("isolable", f.isolable());
+        if (!f.isolable()) {
+            o.put("reason", f.reason());
+            o.set("stop_stations", Json.strings(f.stopStations()));
+            o.set("station_inlet_valves", Json.strings(f.stationInletValves()));
+        }
+        o.put("text", f.text());
     }
 
     static void fallbackJson(ObjectNode o, Isolation.Fallback f) {
@@ -140,6 +160,11 @@ final class EmergencyReport {
     }
 
     static ObjectNode responseJson(Restoration.Result r, ResponseSettings s) {
+        return responseJson(r, s, null);
+    }
+
+    /** The sizing; with work packages, the crews in use are the packages' count. */
+    static ObjectNode responseJson(Restoration.Result r, ResponseSettings s, WorkPackages.Result wp) {
         ObjectNode o = Json.object();
         ResponseSizing.Result z = r.sizing();
         o.put("meters_shut_off", r.metersShutOff());
@@ -156,9 +181,16 @@ final class EmergencyReport {
         o.put("shutoff_crews_needed", z.shutoffCrews());
         o.put("relight_technicians_needed", z.relightTechs());
         o.put("relight_crews_needed", z.relightCrews());
-        o.put("crews", z.crews());
-        o.put("shutoff_hours_with_crews", round(z.shutoffHoursWithCrews(), 2));
-        o.put("relight_hours_with_crews", round(z.relightHoursWithCrews(), 2));
+        int crews = wp == null || wp.packages().isEmpty() ? z.crews() : wp.packages().size();
+        o.put("crews", crews);
+        o.put("crews_computed", z.crewsComputed());
+        if (wp != null) {
+            o.put("work_packages", wp.packages().size());
+            o.put("longest_package_hours", round(wp.maxHours(), 2));
+            o.put("packing_extra_crews", wp.extraCrews());
+        }
+        o.put("shutoff_hours_with_crews", round(z.shutoffTechHours() / (crews * (double) s.rates().techsPerCrew()), 2));
+        o.put("relight_hours_with_crews", round(z.relightTechHours() / (crews * (double) s.rates().techsPerCrew()), 2));
         ObjectNode rates = o.putObject("rates");
         rates.put("shutoffs_per_tech_hour", s.rates().shutoffsPerTechHour());
         rates.put("relights_per_tech_hour", s.rates().relightsPerTechHour());
@@ -174,15 +206,18 @@ final class EmergencyReport {
         ArrayNode a = Json.MAPPER.createArrayNode();
         for (WorkPackages.Package p : w.packages()) {
             ObjectNode o = a.addObject();
-            o.put("sheet", p.sheet());
             o.put("crew", p.crew());
+            o.put("sheet", p.sheet());
+            o.set("sheets", Json.strings(p.sheets()));
             o.put("meters", p.meters());
+            o.put("hours", round(p.hours(), 2));
             ArrayNode v = o.putArray("visits");
             for (WorkPackages.Visit x : p.visits()) {
                 ObjectNode q = v.addObject();
                 q.put("service", x.serviceId());
                 q.put("address", x.address());
                 q.put("street", x.street());
+                q.put("sheet", x.sheet());
                 q.put("meters", x.meters());
                 if (!x.critical().isEmpty()) q.put("critical", x.critical());
             }
@@ -200,18 +235,15 @@ final class EmergencyReport {
             if (!iso.stationInletValves().isEmpty()) sb.append("  their inlet valves: ").append(String.join(", ", iso.stationInletValves())).append('\n');
             sb.append('\n');
         }
-        sb.append("Valves to close, in operating order:\n");
-        for (Isolation.ValveStep v : iso.valves()) {
-            double[] xy = IncidentResponse.valveXY(s, v.valve());
-            sb.append(String.format(Locale.ROOT, "  %2d. %-10s operable %-7s crew %d  %s%s%n", v.order(), v.valveId(),
-                    v.operable().name().toLowerCase(Locale.ROOT), crewOf(r.route(), v.valveId()), grid.reference(xy[0], xy[1]),
-                    v.overdue() ? "  past inspection interval" : ""));
+        sb.append("Valves to close, in field order (crew 1's route, then crew 2's; doubtful valves first in each):\n");
+        for (ValveOrder.Step v : r.order().steps()) {
+            sb.append(String.format(Locale.ROOT, "  %2d. %-10s crew %d  operable %-7s %s%s%s%n", v.order(), v.valveId(), v.crew(),
+                    v.operable().name().toLowerCase(Locale.ROOT), grid.reference(v.x(), v.y()),
+                    v.overdue() ? "  past inspection interval" : "", v.stationInlet() ? "  station inlet (stops the station)" : ""));
+            if (v.fallback() != null) sb.append("        if it will not close (").append(v.fallback().why()).append("): ")
+                    .append(v.fallback().text()).append('\n');
         }
-        if (iso.valves().isEmpty()) sb.append("  (none)\n");
-        if (!iso.fallbacks().isEmpty()) {
-            sb.append("If a valve will not close:\n");
-            for (Isolation.Fallback f : iso.fallbacks()) fallbackText(sb, "  ", f);
-        }
+        if (r.order().steps().isEmpty()) sb.append("  (none)\n");
         iso.alternative().ifPresent(a -> sb.append("Alternative with fewer valves: ").append(String.join(", ", a.valves()))
                 .append(" (adds ").append(a.addedServices().size()).append(" services, ").append(a.addedMeters()).append(" meters")
                 .append(r.alternativeRoute().map(rt -> String.format(Locale.ROOT, "; %.0f min", rt.elapsedMinutes())).orElse(""))
@@ -225,10 +257,8 @@ final class EmergencyReport {
     }
 
     static void fallbackText(StringBuilder sb, String indent, Isolation.Fallback f) {
-        sb.append(indent).append(f.valveId()).append(" (").append(f.why()).append("): then close ")
-                .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
-                .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
+        sb.append(indent).append("if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): ")
+                .append(org.shutline.report.ReportView.fallbackText(f)).append('\n');
     }
 
     static void routeText(StringBuilder sb, ValveRoute.Result r) {
@@ -290,12 +320,27 @@ final class EmergencyReport {
     }
 
     static void responseText(StringBuilder sb, Restoration.Result r, ResponseSettings s) {
+        responseText(sb, r, s, null);
+    }
+
+    /** The sizing; with work packages, the crews in use are the packages' count (one package per crew). */
+    static void responseText(StringBuilder sb, Restoration.Result r, ResponseSettings s, WorkPackages.Result wp) {
         ResponseSizing.Result z = r.sizing();
-        sb.append(String.format(Locale.ROOT, "Shut-off: %d meters, %.1f technician-hours; %d technicians (%d crews) to finish in %.1f h; %.1f h with %d crews%n",
-                r.metersShutOff(), z.shutoffTechHours(), z.shutoffTechs(), z.shutoffCrews(), s.targetHours(), z.shutoffHoursWithCrews(), z.crews()));
-        sb.append(String.format(Locale.ROOT, "Relight: %d meters (%.0f visits with %.0f %% second visits), %.1f technician-hours; %d technicians (%d crews) to finish in %.1f h; %.1f h with %d crews%n",
+        int crews = wp == null || wp.packages().isEmpty() ? z.crews() : wp.packages().size();
+        double techs = crews * (double) s.rates().techsPerCrew();
+        sb.append(String.format(Locale.ROOT, "Shut-off: %d meters, %.1f technician-hours; %d technicians (%d crews of %d) needed to finish in %.1f h%n",
+                r.metersShutOff(), z.shutoffTechHours(), z.shutoffTechs(), z.shutoffCrews(), s.rates().techsPerCrew(), s.targetHours()));
+        if (z.crewsComputed()) {
+            sb.append(String.format(Locale.ROOT, "  crews: %d, computed from the %.1f h target%s; %.1f h with %d crews%n", crews, s.targetHours(),
+                    wp != null && wp.extraCrews() > 0 ? " (" + wp.extraCrews() + " more than the arithmetic: the premises do not divide evenly along streets)" : "",
+                    z.shutoffTechHours() / techs, crews));
+        } else {
+            sb.append(String.format(Locale.ROOT, "  crews: %d, as given; %.1f h with %d crews%s%n", crews, z.shutoffTechHours() / techs, crews,
+                    z.shutoffTechHours() / techs > s.targetHours() + 1e-9 ? String.format(Locale.ROOT, " (over the %.1f h target)", s.targetHours()) : ""));
+        }
+        sb.append(String.format(Locale.ROOT, "Relight: %d meters (%.0f visits with %.0f %% second visits), %.1f technician-hours; %d technicians (%d relight crews, sized separately) to finish in %.1f h; %.1f h with %d crews%n",
                 r.metersRelight(), z.relightVisits(), s.rates().secondVisitFraction() * 100, z.relightTechHours(), z.relightTechs(),
-                z.relightCrews(), s.relightTargetHours(), z.relightHoursWithCrews(), z.crews()));
+                z.relightCrews(), s.relightTargetHours(), z.relightTechHours() / techs, crews));
         if (r.purge()) {
             sb.append("District(s) left dead: ").append(String.join(", ", r.deadSystems()))
                     .append(": purge the mains and relight every service of the district\n");
@@ -304,13 +349,17 @@ final class EmergencyReport {
 
     static void packagesText(StringBuilder sb, WorkPackages.Result w, int maxPerPackage) {
         if (w.packages().isEmpty()) return;
-        sb.append("Work packages (by map sheet, along streets):\n");
+        sb.append(String.format(Locale.ROOT, "Work packages: %d, one per crew, balanced by technician-hours (longest %.1f h%s); critical customers first in each, then along streets:%n",
+                w.packages().size(), w.maxHours(), w.crewsComputed() ? String.format(Locale.ROOT, "; target %.1f h", w.targetHours()) : ""));
+        if (w.overTarget() > 0) sb.append("  ").append(w.overTarget()).append(" package(s) over the target: a single premises needs more than one crew's target hours\n");
         for (WorkPackages.Package p : w.packages()) {
-            sb.append(String.format(Locale.ROOT, "  crew %d  %-24s %4d services %5d meters%n", p.crew(), p.sheet(), p.visits().size(), p.meters()));
+            sb.append(String.format(Locale.ROOT, "  crew %d  %4d services %5d meters %5.1f h  %s%s%n", p.crew(), p.visits().size(), p.meters(), p.hours(),
+                    p.sheet(), p.criticalCount() > 0 ? "  (" + p.criticalCount() + " critical first)" : ""));
+            if (!p.streets().isEmpty()) sb.append("      streets: ").append(String.join(", ", p.streets())).append('\n');
             int n = 0;
             for (WorkPackages.Visit v : p.visits()) {
                 if (n++ >= maxPerPackage) {
-                    sb.append("      ... and ").append(p.visits().size() - maxPerPackage).append(" more\n");
+                    sb.append("      ... and ").append(p.visits().size() - maxPerPackage).append(" more (all in --format json)\n");
                     break;
                 }
                 sb.append("      ").append(v.serviceId()).append("  ").append(v.address() == null ? "" : v.address())

@@ -188,8 +188,10 @@ public final class ExportCommand implements Callable<Integer> {
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         NetworkState base = NetworkState.of(t);
         ValveSegments baseSegs = ValveSegments.build(base);
-        Isolation.Result r = new Isolation(baseSegs, iso).isolate(zone);
-        org.shutline.analysis.InstructionCheck.verify(baseSegs, r, "export " + (where.main != null ? "main " + where.main
+        // the same field order (crews' routes, doubtful valves first) and crews as `incident` with its defaults
+        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(baseSegs, iso, zone,
+                org.shutline.analysis.ResponseSettings.DEFAULT);
+        org.shutline.analysis.InstructionCheck.verify(baseSegs, r.isolation(), "export " + (where.main != null ? "main " + where.main
                 : String.format(Locale.ROOT, "point %.1f,%.1f", where.at[0], where.at[1])));
         String subject = where.main != null ? "Incident on main " + where.main
                 : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],

@@ -77,8 +77,8 @@ public final class IncidentCommand implements Callable<Integer> {
     @Option(names = "--system", paramLabel = "ID", description = "pressure system: with --at or --usng the nearest main of it; for overpressure the system")
     private String system;
 
-    @Option(names = "--crews", defaultValue = "2", description = "crews available (default: ${DEFAULT-VALUE})")
-    private int crews;
+    @Option(names = "--crews", paramLabel = "N", description = "crews available (default: computed from --target-hours)")
+    private Integer crews;
 
     @Option(names = "--target-hours", defaultValue = "4", description = "hours to finish the shut-off in (default: ${DEFAULT-VALUE})")
     private double targetHours;
@@ -113,8 +113,8 @@ public final class IncidentCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         ResponseSettings settings;
         try {
-            settings = new ResponseSettings(ResponseRates.DEFAULT, new ValveRoute.Settings(valveMinutes, speed, detour), crews,
-                    targetHours, relightHours);
+            settings = new ResponseSettings(ResponseRates.DEFAULT, new ValveRoute.Settings(valveMinutes, speed, detour),
+                    crews == null ? 1 : crews, crews != null, targetHours, relightHours);
         } catch (IllegalArgumentException e) {
             return NetworkInput.badInput(err, e.getMessage());
         }
@@ -174,12 +174,13 @@ public final class IncidentCommand implements Callable<Integer> {
             rest = r.restoration();
             workSet = rest.shutOff();
         }
-        WorkPackages.Result wp = WorkPackages.build(net, workSet, grid.sheetKey(), settings.crews());
-        root.set("response", EmergencyReport.responseJson(rest, settings));
+        WorkPackages.Result wp = WorkPackages.build(net, workSet, grid.sheetKey(), rest.sizing().crews(),
+                rest.sizing().crewsComputed(), settings);
+        root.set("response", EmergencyReport.responseJson(rest, settings, wp));
         root.set("work_packages", EmergencyReport.packagesJson(wp));
         root.put("caution", Caution.TEXT);
         sb.append('\n');
-        EmergencyReport.responseText(sb, rest, settings);
+        EmergencyReport.responseText(sb, rest, settings, wp);
         sb.append('\n');
         EmergencyReport.packagesText(sb, wp, 8);
         sb.append('\n').append(Caution.TEXT).append('\n');

@@ -8,7 +8,10 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.ResponseSettings;
+import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
@@ -81,15 +84,19 @@ public final class IsolateCommand implements Callable<Integer> {
         }
         Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
-        Isolation iso = new Isolation(segs, Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf));
         Isolation.Result r;
+        ValveOrder.Result order;
         try {
-            r = iso.isolate(zone);
+            // the same field order as `incident` and `export` (crews computed from the 4 h target)
+            IncidentResponse.Result resp = IncidentResponse.leak(segs, Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf),
+                    zone, ResponseSettings.DEFAULT);
+            r = resp.isolation();
+            order = resp.order();
         } catch (IllegalArgumentException e) {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
         org.shutline.analysis.InstructionCheck.verify(segs, r, "isolate " + zoneText());
-        out.print(format == Format.json ? Json.write(json(t.network(), r)) : text(t.network(), r));
+        out.print(format == Format.json ? Json.write(json(t.network(), r, order)) : text(t.network(), r, order));
         out.flush();
         return 0;
     }
@@ -99,11 +106,13 @@ public final class IsolateCommand implements Callable<Integer> {
                 : String.format(Locale.ROOT, "point (%.1f, %.1f)%s", where.at[0], where.at[1], system == null ? "" : " on " + system);
     }
 
-    static ObjectNode json(Network net, Isolation.Result r) {
+    static ObjectNode json(Network net, Isolation.Result r, ValveOrder.Result order) {
         ObjectNode root = Json.object();
         root.put("isolable", r.isolable());
         if (!r.isolable()) root.put("reason", r.reason());
-        root.set("valves_to_close", Json.strings(r.valveIds()));
+        List<String> ids = new java.util.ArrayList<>();
+        for (ValveOrder.Step v : order.steps()) if (!v.stationInlet()) ids.add(v.valveId());
+        root.set("valves_to_close", Json.strings(ids));
         ArrayNode fb = root.putArray("fallbacks");
         for (Isolation.Fallback f : r.fallbacks()) {
             ObjectNode o = fb.addObject();
@@ -113,6 +122,8 @@ public final class IsolateCommand implements Callable<Integer> {
             o.put("adds_services", f.addedServices().size());
             o.put("adds_meters", f.addedMeters());
             o.set("added_service_ids", Json.strings(f.addedServices()));
+            ValveOrder.Step st = order.step(f.valveId());
+            if (st != null && st.fallback() != null) o.put("text", st.fallback().text());
         }
         root.put("services_off", r.serviceIdsOff().size());
         root.put("meters_off", r.metersOff());
@@ -133,7 +144,7 @@ public final class IsolateCommand implements Callable<Integer> {
         return root;
     }
 
-    private String text(Network net, Isolation.Result r) {
+    private String text(Network net, Isolation.Result r, ValveOrder.Result order) {
         StringBuilder sb = new StringBuilder();
         sb.append("Isolation of ").append(zoneText()).append(" in ").append(net.sourceName()).append("\n\n");
         if (!r.isolable()) {
@@ -142,21 +153,15 @@ public final class IsolateCommand implements Callable<Integer> {
             if (!r.stationInletValves().isEmpty()) sb.append("  their inlet valves: ").append(String.join(", ", r.stationInletValves())).append('\n');
             sb.append('\n');
         }
-        sb.append("Valves to close, in order:\n");
-        for (Isolation.ValveStep v : r.valves()) {
-            sb.append(String.format(Locale.ROOT, "  %2d. %-10s operable %-7s%s%n", v.order(), v.valveId(),
-                    v.operable().name().toLowerCase(Locale.ROOT), v.overdue() ? "  past inspection interval" : ""));
+        sb.append("Valves to close, in field order (crew 1's route, then crew 2's; doubtful valves first in each):\n");
+        for (ValveOrder.Step v : order.steps()) {
+            sb.append(String.format(Locale.ROOT, "  %2d. %-10s crew %d  operable %-7s%s%s%n", v.order(), v.valveId(), v.crew(),
+                    v.operable().name().toLowerCase(Locale.ROOT), v.overdue() ? "  past inspection interval" : "",
+                    v.stationInlet() ? "  station inlet (stops the station)" : ""));
+            if (v.fallback() != null) sb.append("        if it will not close (").append(v.fallback().why()).append("): ")
+                    .append(v.fallback().text()).append('\n');
         }
-        if (r.valves().isEmpty()) sb.append("  (none)\n");
-        if (!r.fallbacks().isEmpty()) {
-            sb.append("\nIf a valve will not close:\n");
-            for (Isolation.Fallback f : r.fallbacks()) {
-                sb.append("  ").append(f.valveId()).append(" (").append(f.why()).append("): then close ")
-                        .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                        .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
-                        .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
-            }
-        }
+        if (order.steps().isEmpty()) sb.append("  (none)\n");
         r.alternative().ifPresent(a -> sb.append("\nAlternative with fewer valves: ").append(String.join(", ", a.valves()))
                 .append(" (adds ").append(a.addedServices().size()).append(" services)\n"));
         sb.append(String.format(Locale.ROOT, "%nServices off %d, meters off %d, unintended segments %d%n", r.serviceIdsOff().size(), r.metersOff(),

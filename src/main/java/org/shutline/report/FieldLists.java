@@ -15,19 +15,22 @@ import org.shutline.render.GridReference;
  * affected-customer list, as a header and rows of text (for {@link TableSheets} and
  * {@link Csv}).
  *
- * <p>Valve list, one row per valve to operate in operating order: order, valve id, US
- * National Grid reference at the given precision (digits truncated; empty when the CRS
- * is unknown), location from the street layer ({@link StreetLocator}), valve kind,
- * operability (with "past inspection" when overdue), last inspection date (empty when
- * none recorded), action (close/open) and the valves to close if it fails.
+ * <p>Valve list, one row per valve to operate in the view's order: order number (for an
+ * incident the field order along the crews' routes), crew (empty for a plan step),
+ * valve id, US National Grid reference at the given precision (digits truncated; empty
+ * when the CRS is unknown), location from the street layer ({@link StreetLocator}),
+ * valve kind, operability (with "past inspection" when overdue), last inspection date
+ * (empty when none recorded), action (close/open) and, for a doubtful valve, the whole
+ * instruction if it will not close (the valves to add and what they add, or the
+ * station to stop).
  *
  * <p>Customer list, one row per service off gas: critical customers first, then by map
  * sheet, then service id; columns service id, address, class, meters, critical kind,
  * map-book sheet (empty when the service lies on no sheet).
  */
 public final class FieldLists {
-    public static final List<String> VALVE_HEADER = List.of("order", "valve", "grid reference (USNG)", "location", "kind",
-            "operable", "last inspection", "action", "if it fails, close");
+    public static final List<String> VALVE_HEADER = List.of("order", "crew", "valve", "grid reference (USNG)", "location", "kind",
+            "operable", "last inspection", "action", "if it will not close");
     public static final List<String> CUSTOMER_HEADER = List.of("service", "address", "class", "meters", "critical",
             "sheet");
 
@@ -37,10 +40,10 @@ public final class FieldLists {
                                                StreetLocator streets) {
         List<List<String>> rows = new ArrayList<>();
         for (ReportView.OperatedValve v : view.valves()) {
-            rows.add(List.of(Integer.toString(v.order()), v.valveId(), grid(geo, v.x(), v.y(), precision),
-                    streets.describe(v.x(), v.y()), word(v.valveKind()), operable(v.operable(), v.overdue()),
-                    v.checked() == null ? "" : v.checked().toString(), v.close() ? "close" : "open",
-                    String.join(" ", v.fallbacks())));
+            rows.add(List.of(Integer.toString(v.order()), v.crew() == 0 ? "" : Integer.toString(v.crew()), v.valveId(),
+                    grid(geo, v.x(), v.y(), precision), streets.describe(v.x(), v.y()), word(v.valveKind()),
+                    operable(v.operable(), v.overdue()), v.checked() == null ? "" : v.checked().toString(),
+                    v.close() ? "close" : "open", v.ifFails()));
         }
         return rows;
     }

@@ -11,6 +11,8 @@ import java.util.Objects;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.shutline.analysis.GasOffExtent;
+import org.shutline.analysis.IncidentResponse;
+import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ValveDoubt;
 import org.shutline.analysis.PlanEvaluation;
@@ -47,16 +49,49 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
     public static final double ERG_115_ISOLATION_M = 100;
 
     /**
-     * A valve to operate with what the valve list needs: position (network CRS), kind,
-     * operability, last inspection (null when never recorded), whether it is past its
-     * inspection interval, and the fallback valves to close if it fails.
+     * A valve to operate with what the valve list needs: its order number (the one used
+     * in every output), position (network CRS), kind, operability, last inspection (null
+     * when never recorded), whether it is past its inspection interval, the fallback
+     * valves to close if it fails, the crew that operates it (0 when no crews are
+     * planned, as for a plan step) and the whole instruction if it will not close
+     * ({@code ifFails}, "" when the valve is not in doubt).
      */
     public record OperatedValve(int order, String valveId, double x, double y, boolean close, ValveKind valveKind,
-                                Operability operable, LocalDate checked, boolean overdue, List<String> fallbacks)
+                                Operability operable, LocalDate checked, boolean overdue, List<String> fallbacks, int crew,
+                                String ifFails)
             implements ValveToOperate {
         public OperatedValve {
             fallbacks = List.copyOf(fallbacks);
+            ifFails = ifFails == null ? "" : ifFails;
         }
+
+        /** Without crew; the instruction is "close " and the fallback valves. */
+        public OperatedValve(int order, String valveId, double x, double y, boolean close, ValveKind valveKind,
+                             Operability operable, LocalDate checked, boolean overdue, List<String> fallbacks) {
+            this(order, valveId, x, y, close, valveKind, operable, checked, overdue, fallbacks, 0,
+                    fallbacks.isEmpty() ? "" : "close " + String.join(", ", fallbacks));
+        }
+    }
+
+    /**
+     * A plan-step fallback in one line: "close V-5, V-6; adds 3 services, 4 meters", with
+     * "valves alone then cannot isolate: stop the station feeding the area" when the
+     * grown area is fed by a station or source.
+     */
+    public static String fallbackText(Isolation.Fallback f) {
+        StringBuilder sb = new StringBuilder();
+        if (!f.isolable()) {
+            sb.append("valves alone cannot isolate: ");
+            List<String> what = new ArrayList<>();
+            if (!f.stationsToStop().isEmpty()) what.add((f.stationsToStop().size() == 1 ? "stop station " : "stop stations ") + String.join(", ", f.stationsToStop()));
+            if (!f.sourcesInRegion().isEmpty()) what.add("shut the supply at source " + String.join(", ", f.sourcesInRegion()));
+            sb.append(what.isEmpty() ? "stop the station or source feeding the grown area" : String.join(" and ", what));
+        }
+        if (!f.thenClose().isEmpty()) sb.append(sb.length() == 0 ? "close " : "; and close ").append(String.join(", ", f.thenClose()));
+        if (sb.length() == 0) sb.append("no further valve to close");
+        int n = f.addedServices().size();
+        return sb.append("; adds ").append(n).append(n == 1 ? " service, " : " services, ").append(f.addedMeters())
+                .append(f.addedMeters() == 1 ? " meter" : " meters").toString();
     }
 
     public ReportView {
@@ -107,11 +142,15 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         List<String> ids;
         boolean close;
         Map<String, List<String>> fallbacks = new HashMap<>();
+        Map<String, String> texts = new HashMap<>();
         if (st.step().action() instanceof StepAction.CloseValves c) {
             ids = c.ordered() || sr.suggestion() == null ? c.valves() : sr.suggestion().order();
             close = true;
             if (sr.suggestion() != null) {
-                for (Isolation.Fallback f : sr.suggestion().fallbacks()) fallbacks.put(f.valveId(), f.thenClose());
+                for (Isolation.Fallback f : sr.suggestion().fallbacks()) {
+                    fallbacks.put(f.valveId(), f.thenClose());
+                    texts.put(f.valveId(), fallbackText(f));
+                }
             }
         } else if (st.step().action() instanceof StepAction.OpenValves o) {
             ids = o.valves();
@@ -127,32 +166,35 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
             if (v == null) continue;
             double[] xy = valvePoint(s, v);
             out.add(new OperatedValve(out.size() + 1, id, xy[0], xy[1], close, s.valveKind(v), s.valveOperability(v),
-                    s.valveChecked(v), ValveDoubt.of(s, v, opt.doubt()).overdue(), fallbacks.getOrDefault(id, List.of())));
+                    s.valveChecked(v), ValveDoubt.of(s, v, opt.doubt()).overdue(), fallbacks.getOrDefault(id, List.of()), 0,
+                    texts.getOrDefault(id, "")));
         }
         return out;
     }
 
     /**
-     * The view of an incident isolated in {@code state}: the valves of the isolation in
-     * operating order with their fallbacks; the services off from the isolation; the
-     * gas-off extent of the pipe live before and dead once the listed valves are closed
-     * and the stations to stop are out (buffered by {@code bufferM} metres, see
-     * {@link GasOffExtent}); an isolation circle of {@code radiusM} metres around
-     * ({@code x}, {@code y}) when {@code x} is not NaN; and, when valves alone cannot
-     * isolate, a critical hazard at each station to stop, and the stations' inlet valves
-     * listed after the isolation's own valves (closing them stops the stations).
+     * The view of an incident isolated in {@code state}: the valves in the field order of
+     * {@code response.order()} ({@link ValveOrder}: numbers along the crews' routes, the
+     * crew, the whole fallback instruction of each doubtful valve, and the inlet valves
+     * of stations to stop when valves alone cannot isolate); the services off from the
+     * isolation; the gas-off extent of the pipe live before and dead once the listed
+     * valves are closed and the stations to stop are out (buffered by {@code bufferM}
+     * metres, see {@link GasOffExtent}); an isolation circle of {@code radiusM} metres
+     * around ({@code x}, {@code y}) when {@code x} is not NaN; and, when valves alone
+     * cannot isolate, a critical hazard at each station to stop.
      */
-    public static ReportView ofIncident(NetworkState state, Isolation.Result r, String subject, double x, double y,
+    public static ReportView ofIncident(NetworkState state, IncidentResponse.Result response, String subject, double x, double y,
                                         double radiusM, double bufferM) {
+        Isolation.Result r = response.isolation();
         List<OperatedValve> vs = new ArrayList<>();
-        Map<String, List<String>> fallbacks = new HashMap<>();
-        for (Isolation.Fallback f : r.fallbacks()) fallbacks.put(f.valveId(), f.thenClose());
         NetworkState after = state;
-        for (Isolation.ValveStep v : r.valves()) {
+        for (ValveOrder.Step v : response.order().steps()) {
             double[] xy = valvePoint(state, v.valve());
+            ValveOrder.Fallback f = v.fallback();
             vs.add(new OperatedValve(v.order(), v.valveId(), xy[0], xy[1], true, state.valveKind(v.valve()), v.operable(),
-                    state.valveChecked(v.valve()), v.overdue(), fallbacks.getOrDefault(v.valveId(), List.of())));
-            after = after.withValveClosed(v.valve(), true);
+                    state.valveChecked(v.valve()), v.overdue(), f == null ? List.of() : f.thenClose(), v.crew(),
+                    f == null ? "" : f.text()));
+            if (!v.stationInlet()) after = after.withValveClosed(v.valve(), true);
         }
         List<Hazard> hz = new ArrayList<>();
         List<Station> stations = state.network().stations();
@@ -168,14 +210,6 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
                         "Stop station " + sid + (r.stationInletValves().isEmpty() ? "" : " (inlet valves "
                                 + String.join(", ", r.stationInletValves()) + ")") + " and watch its outlet pressure."));
             }
-        }
-        Map<String, Integer> index = valveIndex(state);
-        for (String id : r.stationInletValves()) {
-            Integer v = index.get(id);
-            if (v == null || vs.stream().anyMatch(o -> o.valveId().equals(id))) continue;
-            double[] xy = valvePoint(state, v);
-            vs.add(new OperatedValve(vs.size() + 1, id, xy[0], xy[1], true, state.valveKind(v), state.valveOperability(v),
-                    state.valveChecked(v), false, List.of()));
         }
         FeedTrace.Result before = FeedTrace.run(state);
         FeedTrace.Result tr = FeedTrace.run(after);

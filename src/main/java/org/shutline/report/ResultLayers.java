@@ -91,18 +91,20 @@ public final class ResultLayers {
         List<List<Object>> rows = new ArrayList<>();
         for (ReportView.OperatedValve o : v.valves()) {
             gs.add(gf.createPoint(new org.locationtech.jts.geom.Coordinate(o.x(), o.y())));
-            rows.add(row(v, o.order(), o.valveId(), o.close() ? "close" : "open",
+            rows.add(row(v, o.order(), o.crew() == 0 ? null : o.crew(), o.valveId(), o.close() ? "close" : "open",
                     o.valveKind() == null ? null : o.valveKind().name().toLowerCase(Locale.ROOT),
                     o.operable() == null ? null : o.operable().name().toLowerCase(Locale.ROOT), o.checked(),
                     o.overdue() ? "yes" : "no", FieldLists.grid(geo, o.x(), o.y(), GridReference.Precision.M1),
-                    streets.describe(o.x(), o.y()), String.join(" ", o.fallbacks())));
+                    streets.describe(o.x(), o.y()), o.ifFails().isEmpty() ? null : o.ifFails(),
+                    o.fallbacks().isEmpty() ? null : String.join(" ", o.fallbacks())));
         }
         return WriteLayer.of("valves_to_operate", GeometryKind.POINT, withView(new Column("op_order", ColumnType.INTEGER),
+                new Column("crew", ColumnType.INTEGER),
                 new Column("valve_id", ColumnType.TEXT), new Column("action", ColumnType.TEXT),
                 new Column("kind", ColumnType.TEXT), new Column("operable", ColumnType.TEXT),
                 new Column("checked", ColumnType.DATE), new Column("overdue", ColumnType.TEXT),
                 new Column("usng", ColumnType.TEXT), new Column("location", ColumnType.TEXT),
-                new Column("fallback", ColumnType.TEXT)), gs, rows);
+                new Column("if_fails", ColumnType.TEXT), new Column("fallback", ColumnType.TEXT)), gs, rows);
     }
 
     static WriteLayer services(ReportView v, MapBook book) {

@@ -14,12 +14,16 @@ import javax.swing.JTextArea;
 import javax.swing.JToggleButton;
 import javax.swing.SpinnerNumberModel;
 import org.locationtech.jts.geom.Geometry;
+import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
-import org.shutline.analysis.ResponseRates;
+import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ResponseSizing;
+import org.shutline.analysis.ValveOrder;
+import org.shutline.analysis.WorkPackages;
 import org.shutline.analysis.Zone;
 import org.shutline.model.Severity;
 import org.shutline.model.Valve;
+import org.shutline.render.GridReference;
 import org.shutline.render.HazardMark;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.ValveToOperate;
@@ -27,31 +31,34 @@ import org.shutline.trace.ValveSegments;
 
 /**
  * "Incident": with the pick button down, a click on the map isolates the main nearest
- * the point in the network as recorded ({@link Isolation} with {@link Zone.AtPoint}, in
- * a worker): valves to close in order, fallbacks for doubtful valves, services and
- * meters off, critical customers, stations to stop, and a crew estimate from
- * {@link ResponseSizing} (shut-off within 4 h, relight within 24 h, default rates).
- * The region is highlighted and the valves are numbered on the map.
+ * the point in the network as recorded ({@link IncidentResponse#leak} with
+ * {@link Zone.AtPoint}, in a worker), with the command line's defaults
+ * ({@link ResponseSettings#DEFAULT}: crews computed from the 4 h shut-off target, relight
+ * sized for 24 h, default rates) unless a crew count is set: valves to close in field
+ * order (crew 1's route, then crew 2's; doubtful valves first in each) with, under each
+ * doubtful valve, the whole instruction if it will not close; stations to stop; services
+ * and meters off, critical customers; the sizing and one shut-off work package per
+ * crew ({@link WorkPackages}, by 1 km US National Grid square when the CRS has a
+ * transform). The region is highlighted and the valves are numbered on the map with the
+ * same numbers.
  */
 final class IncidentPanel extends JPanel {
-    static final double SHUTOFF_TARGET_H = 4;
-    static final double RELIGHT_TARGET_H = 24;
-
     private final MainWindow window;
     private final JToggleButton pick = new JToggleButton("Pick incident point");
-    private final JSpinner crews = new JSpinner(new SpinnerNumberModel(4, 1, 200, 1));
+    /** 0 = crews computed from the target (the command line's default). */
+    private final JSpinner crews = new JSpinner(new SpinnerNumberModel(0, 0, 200, 1));
     private final JTextArea text = new JTextArea();
-    private Isolation isolation;
-    private Workspace isolationFor;
 
     IncidentPanel(MainWindow window) {
         super(new BorderLayout());
         this.window = window;
         text.setEditable(false);
+        text.setLineWrap(true);
+        text.setWrapStyleWord(true);
         text.setName("incidentText");
         JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT));
         top.add(pick);
-        top.add(new JLabel("crews available:"));
+        top.add(new JLabel("crews (0 = from the 4 h target):"));
         top.add(crews);
         add(top, BorderLayout.NORTH);
         add(new JScrollPane(text), BorderLayout.CENTER);
@@ -66,49 +73,58 @@ final class IncidentPanel extends JPanel {
         pick.setSelected(on);
     }
 
+    /** The settings used: the command line's defaults, with the crew count when one is set. */
+    ResponseSettings settings() {
+        int n = (Integer) crews.getValue();
+        return n <= 0 ? ResponseSettings.DEFAULT : ResponseSettings.DEFAULT.withCrews(n);
+    }
+
     /** Isolates at (x, y) in a worker and shows the result. */
     void at(double x, double y) {
         Workspace ws = window.workspace();
         if (ws == null) return;
-        int crewCount = (Integer) crews.getValue();
+        ResponseSettings settings = settings();
         text.setText(String.format(Locale.ROOT, "Isolating at %.1f, %.1f ...", x, y));
+        Isolation.Options opt = Isolation.Options.defaults(LocalDate.now());
         window.run(new Task<>("isolate", p -> {
             p.begin("isolate", 0);
-            Isolation iso = isolationFor(ws);
-            Isolation.Result r = iso.isolate(new Zone.AtPoint(x, y, null));
+            IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), opt, new Zone.AtPoint(x, y, null), settings);
             // never shown unless its re-trace confirms it (a mismatch fails the task with the query named)
-            org.shutline.analysis.InstructionCheck.verify(ws.segments(), r, String.format(Locale.ROOT, "incident at %.1f, %.1f", x, y));
-            return r;
-        }, r -> show(ws, r, x, y, crewCount), t -> text.setText("Isolation failed: " + t.getMessage())));
+            org.shutline.analysis.InstructionCheck.verify(ws.segments(), r.isolation(), String.format(Locale.ROOT, "incident at %.1f, %.1f", x, y));
+            WorkPackages.Result wp = WorkPackages.build(ws.network(), r.restoration().shutOff(), sheetKey(ws),
+                    r.restoration().sizing().crews(), r.restoration().sizing().crewsComputed(), settings);
+            return new Outcome(r, wp);
+        }, o -> show(ws, o, x, y, settings), t -> text.setText("Isolation failed: " + t.getMessage())));
     }
 
-    private synchronized Isolation isolationFor(Workspace ws) {
-        if (isolationFor != ws) {
-            isolation = new Isolation(ws.segments(), Isolation.Options.defaults(LocalDate.now()));
-            isolationFor = ws;
-        }
-        return isolation;
+    private record Outcome(IncidentResponse.Result response, WorkPackages.Result packages) {}
+
+    private static WorkPackages.SheetKey sheetKey(Workspace ws) {
+        var geo = ws.geo().orElse(null);
+        if (geo == null) return WorkPackages.SheetKey.NONE;
+        return (x, y) -> {
+            try {
+                return geo.gridReference(x, y).format(GridReference.Precision.KM1);
+            } catch (IllegalArgumentException e) {
+                return "(outside the grid)";
+            }
+        };
     }
 
-    private void show(Workspace ws, Isolation.Result r, double x, double y, int crewCount) {
+    /** The text shown for an incident (also read by the tests). */
+    static String describe(IncidentResponse.Result resp, WorkPackages.Result wp, double x, double y, ResponseSettings s) {
+        Isolation.Result r = resp.isolation();
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "Incident at %.1f, %.1f%n", x, y));
         if (!r.isolable()) sb.append("Valves alone cannot isolate it: ").append(r.reason()).append('\n');
-        sb.append("Valves to close, in order:\n");
-        List<ValveToOperate> marks = new ArrayList<>();
-        for (Isolation.ValveStep v : r.valves()) {
-            sb.append(String.format(Locale.ROOT, "  %d. %s (operable: %s%s)%n", v.order(), v.valveId(),
-                    org.shutline.model.Words.word(v.operable()), v.overdue() ? ", inspection overdue" : ""));
-            int vi = ws.valveIndex(v.valveId());
-            Valve valve = vi < 0 ? null : ws.network().valves().get(vi);
-            if (valve != null && valve.geometry() != null) {
-                marks.add(ValveToOperate.of(v.order(), v.valveId(), valve.geometry().getX(), valve.geometry().getY(), true));
+        sb.append("Valves to close, in field order (crew 1's route, then crew 2's; doubtful valves first):\n");
+        for (ValveOrder.Step v : resp.order().steps()) {
+            sb.append(String.format(Locale.ROOT, "  %d. %s  crew %d  (operable: %s%s)%s%n", v.order(), v.valveId(), v.crew(),
+                    org.shutline.model.Words.word(v.operable()), v.overdue() ? ", inspection overdue" : "",
+                    v.stationInlet() ? "  station inlet" : ""));
+            if (v.fallback() != null) {
+                sb.append("      if it will not close (").append(v.fallback().why()).append("): ").append(v.fallback().text()).append('\n');
             }
-        }
-        for (Isolation.Fallback f : r.fallbacks()) {
-            sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): close ")
-                    .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                    .append(", adding ").append(f.addedServices().size()).append(" services\n");
         }
         if (!r.stationsToStop().isEmpty()) {
             sb.append("Stations to stop: ").append(String.join(", ", r.stationsToStop()))
@@ -116,25 +132,48 @@ final class IncidentPanel extends JPanel {
         }
         sb.append(String.format(Locale.ROOT, "Services off: %d, meters off: %d%n", r.serviceIdsOff().size(), r.metersOff()));
         sb.append("Critical customers off: ").append(r.criticalOff().isEmpty() ? "none" : String.join(", ", r.criticalOff())).append('\n');
-        int meters = (int) Math.min(Integer.MAX_VALUE, r.metersOff());
-        ResponseSizing.Result z = ResponseSizing.size(meters, meters, SHUTOFF_TARGET_H, RELIGHT_TARGET_H, crewCount, ResponseRates.DEFAULT);
+        ResponseSizing.Result z = resp.restoration().sizing();
+        int n = wp.packages().isEmpty() ? z.crews() : wp.packages().size();
+        double techs = n * (double) s.rates().techsPerCrew();
         sb.append(String.format(Locale.ROOT,
-                "Crew estimate (default rates): shut-off %.1f tech-hours, %d crews to finish in %.0f h; relight %.1f tech-hours, %d crews in %.0f h.%n"
-                        + "With %d crews: shut-off %.1f h, relight %.1f h.%n",
-                z.shutoffTechHours(), z.shutoffCrews(), SHUTOFF_TARGET_H, z.relightTechHours(), z.relightCrews(), RELIGHT_TARGET_H,
-                crewCount, z.shutoffHoursWithCrews(), z.relightHoursWithCrews()));
-        text.setText(sb.toString());
+                "Shut-off: %.1f technician-hours, %d crews needed for %.0f h; crews: %d (%s); %.1f h with them.%n"
+                        + "Relight: %.1f technician-hours, %d relight crews for %.0f h; %.1f h with %d crews.%n",
+                z.shutoffTechHours(), z.shutoffCrews(), s.targetHours(), n, z.crewsComputed() ? "computed from the target" : "as set",
+                z.shutoffTechHours() / techs, z.relightTechHours(), z.relightCrews(), s.relightTargetHours(), z.relightTechHours() / techs, n));
+        if (!wp.packages().isEmpty()) {
+            sb.append(String.format(Locale.ROOT, "Work packages (one per crew, longest %.1f h):%n", wp.maxHours()));
+            for (WorkPackages.Package p : wp.packages()) {
+                sb.append(String.format(Locale.ROOT, "  crew %d: %d services, %d meters, %.1f h; %s%s%n", p.crew(), p.visits().size(),
+                        p.meters(), p.hours(), String.join(", ", p.streets()),
+                        p.criticalCount() > 0 ? " (" + p.criticalCount() + " critical first)" : ""));
+            }
+        }
+        return sb.toString();
+    }
+
+    private void show(Workspace ws, Outcome o, double x, double y, ResponseSettings s) {
+        IncidentResponse.Result resp = o.response();
+        Isolation.Result r = resp.isolation();
+        text.setText(describe(resp, o.packages(), x, y, s));
         text.setCaretPosition(0);
+        List<ValveToOperate> marks = new ArrayList<>();
+        for (ValveOrder.Step v : resp.order().steps()) {
+            int vi = ws.valveIndex(v.valveId());
+            Valve valve = vi < 0 ? null : ws.network().valves().get(vi);
+            if (valve != null && valve.geometry() != null) {
+                marks.add(ValveToOperate.of(v.order(), v.valveId(), valve.geometry().getX(), valve.geometry().getY(), true));
+            }
+        }
         List<Geometry> region = new ArrayList<>();
         ValveSegments segs = ws.segments();
         var reg = r.region();
         reg.or(r.unintended());
-        for (int s = reg.nextSetBit(0); s >= 0; s = reg.nextSetBit(s + 1)) {
-            for (int m : segs.mains(s)) if (m < ws.network().mains().size()) region.add(ws.network().mains().get(m).geometry());
+        for (int sg = reg.nextSetBit(0); sg >= 0; sg = reg.nextSetBit(sg + 1)) {
+            for (int m : segs.mains(sg)) if (m < ws.network().mains().size()) region.add(ws.network().mains().get(m).geometry());
         }
-        MapOverlays o = MapOverlays.NONE.withValvesToOperate(marks)
+        MapOverlays ov = MapOverlays.NONE.withValvesToOperate(marks)
                 .withHazards(List.of(HazardMark.of(x, y, Severity.CRITICAL, "incident")));
-        window.showPanelMarks(o, region);
-        window.status(String.format(Locale.ROOT, "Incident: %d valves to close, %d services off", r.valves().size(), r.serviceIdsOff().size()));
+        window.showPanelMarks(ov, region);
+        window.status(String.format(Locale.ROOT, "Incident: %d valves to close, %d services off", resp.order().steps().size(), r.serviceIdsOff().size()));
     }
 }

@@ -55,6 +55,36 @@ class ValveRouteTest {
         assertThat(many.elapsedMinutes()).isCloseTo(10, within(1e-9));
     }
 
+    /*
+     * FOUR with D doubtful and ranks A 0, B 1, C 2, D 2 (hop distance, feeding side first).
+     * Two crews: the tour A C D B splits into [A C] and [D B]. Crew 1: nothing doubtful, A (rank 0) then C.
+     * Crew 2: D (doubtful) first, then B. Order numbers: A 1, C 2, D 3, B 4.
+     * One crew: D first, then A (0), B (1), C (2): D-A 3162.28 m, A-B 3000, B-C 3162.28 = 9324.56 m straight.
+     */
+    @Test
+    void doubtfulValvesFirstThenFeedingSideFirstAndNumbersAlongTheRuns() {
+        List<ValveRoute.Stop> s = List.of(new ValveRoute.Stop("A", 0, 0, false, 0), new ValveRoute.Stop("B", 3000, 0, false, 1),
+                new ValveRoute.Stop("C", 0, 1000, false, 2), new ValveRoute.Stop("D", 3000, 1000, true, 2));
+        ValveRoute.Result two = ValveRoute.plan(s, 2, ValveRoute.Settings.DEFAULT);
+        assertThat(two.fieldOrder()).containsExactly("A", "C", "D", "B");
+        assertThat(two.orderOf("D")).isEqualTo(3);
+        assertThat(two.crewOf("B")).isEqualTo(2);
+        ValveRoute.Result one = ValveRoute.plan(s, 1, ValveRoute.Settings.DEFAULT);
+        assertThat(one.fieldOrder()).containsExactly("D", "A", "B", "C");
+        double straight = 2 * Math.hypot(3000, 1000) + 3000;
+        assertThat(one.driveMetres()).isCloseTo(straight * 1.3, within(1e-6));
+        // D fails: crew 1 drives D -> E (3000,2000) 1000 m -> F (0,2000) 3000 m, then on to A (0,0) 2000 m
+        // instead of D -> A (3162.28 m): extra straight 1000 + 3000 + 2000 - 3162.28 = 2837.72 m;
+        // x 1.3 / 25 km/h = 8.854 min, plus 2 valves x 10 min
+        ValveRoute.Detour d = ValveRoute.detour(one, s.get(3), List.of(new ValveRoute.Stop("F", 0, 2000),
+                new ValveRoute.Stop("E", 3000, 2000)), ValveRoute.Settings.DEFAULT);
+        assertThat(d.crew()).isEqualTo(1);
+        assertThat(d.valves()).containsExactly("E", "F");
+        double extra = 1000 + 3000 + 2000 - Math.hypot(3000, 1000);
+        assertThat(d.extraMetres()).isCloseTo(extra * 1.3, within(1e-6));
+        assertThat(d.extraMinutes()).isCloseTo(20 + extra * 1.3 / 1000 / 25 * 60, within(1e-9));
+    }
+
     @Test
     void settingsChangeTheArithmetic() {
         // 5 min a valve, 50 km/h, no detour: A C D B = 5 km -> 6 min + 20 min = 26 min

@@ -34,24 +34,87 @@ class WorkPackagesTest {
                 base.services(), base.sources(), List.of(streets), base.readFindings());
         BitSet all = new BitSet();
         all.set(0, 5);
+        // walking order: sheet E before W; in E by street name: North Row (s3, 3 m), South Row (s5, 5 m),
+        // West Lane (s4, 4 m); in W along North Row: s1 (1 m, at 25 m), s2 (2 m, at 55 m). Total 15 meters.
+        // Two crews given: the smallest largest package of consecutive pieces is 8 meters
+        // ([3, 5 | 4, 1, 2]; [3 | 5, 4, 1, 2] and [3, 5, 4 | 1, 2] give 12); the cut falls at the end of a street.
         WorkPackages.Result r = WorkPackages.build(net, all, (x, y) -> x < 60 ? "W" : "E", 2);
-        assertThat(r.packages()).extracting(WorkPackages.Package::sheet).containsExactly(WorkPackages.CRITICAL, "E", "W");
-        WorkPackages.Package crit = r.packages().get(0), east = r.packages().get(1), west = r.packages().get(2);
-        assertThat(crit.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s3");
-        assertThat(crit.visits().get(0).critical()).isEqualTo("clinic");
-        assertThat(crit.crew()).isEqualTo(1);
-        // E: South Row before West Lane (street name order)
-        assertThat(east.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s5", "s4");
-        assertThat(east.visits()).extracting(WorkPackages.Visit::street).containsExactly("South Row", "West Lane");
-        assertThat(east.meters()).isEqualTo(9);
-        // W: along North Row from its west end: s1 at 25 m, s2 at 55 m
-        assertThat(west.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s1", "s2");
-        assertThat(west.visits().get(0).along()).isEqualTo(25.0);
-        // crew 1 has the clinic (3 m); E (9 m, the largest) goes to crew 2 (0 m), W (3 m) to crew 1 (3 m < 9 m)
-        assertThat(east.crew()).isEqualTo(2);
-        assertThat(west.crew()).isEqualTo(1);
-        assertThat(r.crewMeters()).containsExactly(6, 9);
-        assertThat(r.ofCrew(1)).extracting(WorkPackages.Package::sheet).containsExactly(WorkPackages.CRITICAL, "W");
+        assertThat(r.packages()).hasSize(2);
+        WorkPackages.Package one = r.packages().get(0), two = r.packages().get(1);
+        assertThat(one.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s3", "s5");
+        assertThat(one.visits().get(0).critical()).isEqualTo("clinic");
+        assertThat(one.crew()).isEqualTo(1);
+        assertThat(one.sheets()).containsExactly("E");
+        assertThat(two.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s4", "s1", "s2");
+        assertThat(two.visits()).extracting(WorkPackages.Visit::street).containsExactly("West Lane", "North Row", "North Row");
+        assertThat(two.sheets()).containsExactly("E", "W");
+        assertThat(two.visits().get(1).along()).isEqualTo(25.0); // along North Row from its west end
+        assertThat(r.crewMeters()).containsExactly(8, 7);
+        // hours: meters / (10 shut-offs per technician-hour x 2 technicians), common practice (docs/emergency.md)
+        assertThat(one.hours()).isEqualTo(0.4);
+        assertThat(two.hours()).isEqualTo(0.35);
+    }
+
+    /*
+     * Crews computed from a 0.25 h target, hand-worked with the common-practice rates of
+     * docs/emergency.md (10 shut-offs per technician-hour, 2 technicians per crew):
+     *   15 meters / 10 = 1.5 technician-hours; / 0.25 h = 6 technicians = 3 crews (the arithmetic).
+     *   A crew does 0.25 h x 20 = 5 meters. In walking order 3 | 5 | 4 + 1 | 2: the meters do not
+     *   divide into three pieces of at most 5 (3 + 5 > 5, 5 + 4 > 5), so 4 packages, 1 more crew.
+     *   Cuts at street ends nearest an equal share: [s3] 3, [s5] 5, [s4] 4, [s1, s2] 3 (North Row kept whole).
+     * With a 0.5 h target: 1.5 / 0.5 = 3 technicians = 2 crews; 10 meters each fits [3, 5 | 4, 1, 2].
+     */
+    @Test
+    void computedCrewsKeepEveryPackageWithinTheTarget() {
+        Network net = ringWithStreets();
+        BitSet all = new BitSet();
+        all.set(0, 5);
+        ResponseSettings quarter = ResponseSettings.DEFAULT.withTargetHours(0.25, 24);
+        ResponseSizing.Result z = ResponseSizing.size(15, 15, 0.25, 24, 0, ResponseRates.DEFAULT);
+        assertThat(z.shutoffTechs()).isEqualTo(6);
+        assertThat(z.crews()).isEqualTo(3);
+        assertThat(z.crewsComputed()).isTrue();
+        WorkPackages.Result r = WorkPackages.build(net, all, (x, y) -> x < 60 ? "W" : "E", z.crews(), true, quarter);
+        assertThat(r.packages()).hasSize(4);
+        assertThat(r.extraCrews()).isEqualTo(1);
+        assertThat(r.crewMeters()).containsExactly(3, 5, 4, 3);
+        assertThat(r.maxHours()).isLessThanOrEqualTo(0.25);
+        assertThat(r.packages().get(3).visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s1", "s2");
+        assertThat(r.overTarget()).isZero();
+        ResponseSettings half = ResponseSettings.DEFAULT.withTargetHours(0.5, 24);
+        ResponseSizing.Result z2 = ResponseSizing.size(15, 15, 0.5, 24, 0, ResponseRates.DEFAULT);
+        assertThat(z2.crews()).isEqualTo(2);
+        WorkPackages.Result r2 = WorkPackages.build(net, all, (x, y) -> x < 60 ? "W" : "E", z2.crews(), true, half);
+        assertThat(r2.packages()).hasSize(2);
+        assertThat(r2.extraCrews()).isZero();
+        assertThat(r2.crewMeters()).containsExactly(8, 7);
+    }
+
+    /* Random sets of premises, seeded: packages = crews (computed from the target), each within it, critical first. */
+    @Test
+    void randomSetsAreBalancedWithinTheTarget() {
+        for (long seed = 1; seed <= 200; seed++) {
+            java.util.Random rnd = new java.util.Random(seed);
+            int n = 1 + rnd.nextInt(60);
+            long[] m = new long[n];
+            long total = 0;
+            for (int i = 0; i < n; i++) total += m[i] = 1 + rnd.nextInt(rnd.nextBoolean() ? 3 : 12);
+            long cap = 12 + rnd.nextInt(40);
+            int k = WorkPackages.count(m, cap);
+            // the greedy count is the fewest: no k - 1 pieces fit (the largest piece of the best k - 1 exceeds cap)
+            if (k > 1) assertThat(WorkPackages.smallestCap(m, k - 1, 1, total)).as("seed %d", seed).isGreaterThan(cap);
+            int[] need = WorkPackages.need(m, cap);
+            assertThat(need[0]).as("seed %d", seed).isEqualTo(k);
+        }
+    }
+
+    private static Network ringWithStreets() {
+        TestNet t = AsciiNet.parse(IsolationTest.RING);
+        Network base = t.network();
+        ContextLayer streets = new ContextLayer("Streets", List.of(
+                street("North Row", -10, 5, 130, 5), street("West Lane", 65, -50, 65, 0), street("South Row", -10, -45, 130, -45)));
+        return new Network(base.sourceName(), base.crs(), base.mains(), base.valves(), base.stations(), base.taps(),
+                base.services(), base.sources(), List.of(streets), base.readFindings());
     }
 
     /* s4 at (60,-30) is nearest West Lane, but its address names North Row: it is listed there. */
@@ -81,12 +144,14 @@ class WorkPackagesTest {
         BitSet some = new BitSet();
         some.set(t.service("s4"));
         some.set(t.service("s1"));
-        WorkPackages.Result r = WorkPackages.build(t.network(), some, WorkPackages.SheetKey.NONE, 3);
+        WorkPackages.Result r = WorkPackages.build(t.network(), some, WorkPackages.SheetKey.NONE, 1);
         assertThat(r.packages()).singleElement().satisfies(p -> {
             assertThat(p.sheet()).isEqualTo("all");
             assertThat(p.visits()).extracting(WorkPackages.Visit::serviceId).containsExactly("s1", "s4");
             assertThat(p.crew()).isEqualTo(1);
         });
+        // three crews given for two premises: one package each, no empty package
+        assertThat(WorkPackages.build(t.network(), some, WorkPackages.SheetKey.NONE, 3).packages()).hasSize(2);
         assertThat(WorkPackages.build(t.network(), new BitSet(), WorkPackages.SheetKey.NONE, 1).packages()).isEmpty();
     }
 

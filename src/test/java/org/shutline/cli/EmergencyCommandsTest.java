@@ -40,7 +40,8 @@ class EmergencyCommandsTest {
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("1. V-013").contains("2. V-004")
-                .contains("V-004 (operability unknown): then close V-005")
+                // the fallback printed under its valve, the extra valve joining the same crew's route
+                .containsPattern("2\\. V-004 +crew 2 .*\\n +if it will not close \\(operability unknown\\): crew 2 then closes V-005 \\(\\+\\d+ min\\)")
                 .contains("Services off 513, meters off 653")
                 .contains("SV-C-CARE")
                 .contains("District(s) left dead: LP-SOUTH")
@@ -57,7 +58,9 @@ class EmergencyCommandsTest {
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("kind").asText()).isEqualTo("leak");
         assertThat(j.get("system").asText()).isEqualTo("IP-1");
-        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-013", "V-004");
+        // one crew: the doubtful V-004 first (a valve that will not close is found before the other is shut)
+        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-004", "V-013");
+        assertThat(texts(j.get("valves_to_close"), "order")).containsExactly("1", "2");
         assertThat(j.get("services_off").asInt()).isEqualTo(513);
         assertThat(j.get("meters_off").asInt()).isEqualTo(653);
         assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CARE");
@@ -66,13 +69,15 @@ class EmergencyCommandsTest {
         assertThat(resp.get("shutoff_tech_hours").asDouble()).isEqualTo(65.3);
         assertThat(resp.get("relight_tech_hours").asDouble()).isEqualTo(574.64);
         assertThat(resp.get("purge").asBoolean()).isTrue();
-        // one crew: V-013 then V-004, both on Gorse Avenue 45 m apart: 20 min operating + the drive
+        // one crew: V-004 then V-013, both on Gorse Avenue 45 m apart: 20 min operating + the drive
         JsonNode vt = j.get("valve_time");
         assertThat(vt.get("crews")).hasSize(1);
         double drive = vt.get("drive_m").asDouble();
         assertThat(drive).isBetween(40 * 1.3, 50 * 1.3);
         assertThat(vt.get("elapsed_minutes").asDouble()).isBetween(20.0, 20.2);
-        assertThat(j.get("work_packages").get(0).get("sheet").asText()).isEqualTo("critical customers first");
+        // one crew given: one package, its critical customer first
+        assertThat(j.get("work_packages")).hasSize(1);
+        assertThat(j.get("work_packages").get(0).get("visits").get(0).get("service").asText()).isEqualTo("SV-C-CARE");
         assertThat(j.get("caution").asText()).isEqualTo(Caution.TEXT);
     }
 
@@ -88,7 +93,13 @@ class EmergencyCommandsTest {
         // side; the verified stop closes the IP-1 stretch around the tee, V-011 and V-013 (ST-S1's inline valve, the
         // next valve east), as `shutline trace --close V-011,V-013` confirms (ST-N1 then feeds nothing)
         assertThat(texts(j.get("station_inlet_valves"))).containsExactly("V-011", "V-013");
-        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-031", "V-033", "V-037");
+        // the stop's valves join the field order after the isolation's own (they stop the station that feeds the zone)
+        assertThat(texts(j.get("valves_to_close"), "valve")).containsExactly("V-031", "V-033", "V-037", "V-013", "V-011");
+        assertThat(j.get("valves_to_close").get(3).get("station_inlet").asBoolean()).isTrue();
+        assertThat(j.get("valves_to_close").get(4).get("station_inlet").asBoolean()).isTrue();
+        // V-037's fallback cannot be done by valves: the stations to stop are named with the valves of their stops
+        assertThat(j.get("valves_to_close").get(2).get("if_it_will_not_close").asText())
+                .startsWith("valves alone cannot isolate: stop stations ST-N1 Tannery Lane Station, ST-N2 Glassworks Road Station (close ");
         assertThat(texts(j.get("critical_off"), "service")).containsExactly("SV-C-CLINIC", "SV-C-SCHOOL1");
         assertThat(j.get("meters_off").asInt()).isEqualTo(650);
     }

@@ -86,16 +86,16 @@ class FieldListsTest {
         StreetLocator streets = new StreetLocator(s.network().context(), LinearUnit.METRE);
         // FGDC-STD-011-2001 (trade-facts.md): 38.8895 N, 77.0352 W -> 18S UJ 23486 06483 (1 m), 18S UJ 234 064 (100 m);
         // digits are truncated, so the 10 m reference is 18S UJ 2348 0648
-        assertThat(FieldLists.valveRows(view(s), geo, GridReference.Precision.M1, streets).get(0).get(2))
+        assertThat(FieldLists.valveRows(view(s), geo, GridReference.Precision.M1, streets).get(0).get(3))
                 .isEqualTo("18S UJ 23486 06483");
         List<String> row = FieldLists.valveRows(view(s), geo, GridReference.Precision.M10, streets).get(0);
-        assertThat(row.get(2)).isEqualTo("18S UJ 2348 0648");
-        assertThat(FieldLists.valveRows(view(s), geo, GridReference.Precision.M100, streets).get(0).get(2))
+        assertThat(row.get(3)).isEqualTo("18S UJ 2348 0648");
+        assertThat(FieldLists.valveRows(view(s), geo, GridReference.Precision.M100, streets).get(0).get(3))
                 .isEqualTo("18S UJ 234 064");
-        assertThat(row).containsExactly("1", "V-1", "18S UJ 2348 0648", "on Mall Drive, 37 m east of Test Street", "main",
-                "unknown, past inspection", "2024-03-05", "close", "V-7 V-9");
+        assertThat(row).containsExactly("1", "", "V-1", "18S UJ 2348 0648", "on Mall Drive, 37 m east of Test Street", "main",
+                "unknown, past inspection", "2024-03-05", "close", "close V-7, V-9");
         assertThat(FieldLists.VALVE_HEADER).hasSameSizeAs(row);
-        assertThat(FieldLists.valveRows(view(s), null, GridReference.Precision.M10, streets).get(0).get(2)).isEmpty();
+        assertThat(FieldLists.valveRows(view(s), null, GridReference.Precision.M10, streets).get(0).get(3)).isEmpty();
     }
 
     @Test

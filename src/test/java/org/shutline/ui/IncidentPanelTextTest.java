@@ -1,0 +1,36 @@
+package org.shutline.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.time.LocalDate;
+import org.junit.jupiter.api.Test;
+import org.shutline.analysis.IncidentResponse;
+import org.shutline.analysis.Isolation;
+import org.shutline.analysis.ResponseSettings;
+import org.shutline.analysis.WorkPackages;
+import org.shutline.analysis.Zone;
+
+/**
+ * The window's incident text on the sample town: the command line's defaults (crews
+ * computed), the same field order and the whole fallback under each doubtful valve
+ * (compare FieldOrderCommandsTest, the same point through {@code shutline incident}).
+ */
+class IncidentPanelTextTest {
+    @Test
+    void sameOrderFallbacksAndPackagesAsTheCommandLine() throws Exception {
+        Workspace ws = SampleWorkspace.get();
+        ResponseSettings s = ResponseSettings.DEFAULT;
+        assertThat(s.crewsGiven()).as("the window's default is the command line's: crews computed").isFalse();
+        IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), Isolation.Options.defaults(LocalDate.of(2026, 12, 1)),
+                new Zone.AtPoint(512470, 4890150, null), s);
+        WorkPackages.Result wp = WorkPackages.build(ws.network(), r.restoration().shutOff(), WorkPackages.SheetKey.NONE,
+                r.restoration().sizing().crews(), r.restoration().sizing().crewsComputed(), s);
+        String text = IncidentPanel.describe(r, wp, 512470, 4890150, s);
+        assertThat(text).containsPattern("1\\. V-015  crew 1 .*\\n +if it will not close \\(operability unknown\\): crew 1 then closes V-024, V-023, V-022, V-021, V-020")
+                .contains("5. V-026  crew 2")
+                .contains("valves alone cannot isolate: stop station ST-S1 Weir Lane Station (close V-013, V-004); adds 387 services, 497 meters")
+                .contains("crews: 2 (computed from the target)")
+                .contains("Work packages (one per crew");
+        assertThat(wp.packages()).hasSize(2);
+    }
+}
