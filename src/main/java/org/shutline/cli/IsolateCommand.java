@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
@@ -36,7 +37,8 @@ public final class IsolateCommand implements Callable<Integer> {
     enum Format { text, json }
 
     static final class Where {
-        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", description = "a point in the network CRS; the nearest active main is taken")
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", converter = Locations.FiniteNumber.class,
+            description = "a point in the network CRS; placed on the nearest active main")
         double[] at;
 
         @Option(names = "--main", paramLabel = "ID", description = "a main id")
@@ -54,6 +56,10 @@ public final class IsolateCommand implements Callable<Integer> {
     @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
     private String system;
 
+    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
+        description = "with --at: refuse a point farther than this from every active main (default: ${DEFAULT-VALUE})")
+    private double maxDistanceM;
+
     @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
     private Path mapping;
 
@@ -62,6 +68,8 @@ public final class IsolateCommand implements Callable<Integer> {
 
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     private Format format;
+
+    private Locations.Located located;
 
     @Override
     public Integer call() {
@@ -73,14 +81,14 @@ public final class IsolateCommand implements Callable<Integer> {
         } catch (InputException e) {
             return NetworkInput.badInput(err, e.getMessage());
         }
-        if (where.at != null && where.at.length != 2) {
-            return NetworkInput.badInput(err, "isolate: --at takes X,Y");
-        }
-        if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
-            return NetworkInput.badInput(err, "isolate: no main with id '" + where.main + "' in " + network);
-        }
-        Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        Placement pl = new Placement(segs);
+        try {
+            located = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, system, maxDistanceM);
+        } catch (Locations.Refusal e) {
+            return NetworkInput.badInput(err, "isolate: " + e.getMessage());
+        }
+        Zone zone = located.zone();
         Isolation iso = new Isolation(segs, Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf));
         Isolation.Result r;
         try {
@@ -88,19 +96,29 @@ public final class IsolateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
-        out.print(format == Format.json ? Json.write(json(t.network(), r)) : text(t.network(), r));
+        out.print(format == Format.json ? Json.write(json(t.network(), r, located.placed())) : text(t.network(), r));
         out.flush();
         return 0;
     }
 
     private String zoneText() {
-        return where.main != null ? "main " + where.main
-                : String.format(Locale.ROOT, "point (%.1f, %.1f)%s", where.at[0], where.at[1], system == null ? "" : " on " + system);
+        return located.label() + (where.main == null && system != null ? " on " + system : "") + "\n" + located.placedText();
     }
 
-    static ObjectNode json(Network net, Isolation.Result r) {
+    static ObjectNode json(Network net, Isolation.Result r, Placement.Placed placed) {
         ObjectNode root = Json.object();
         root.put("isolable", r.isolable());
+        if (placed != null) {
+            ObjectNode loc = root.putObject("location");
+            loc.put("main", placed.mainId());
+            if (placed.edge() >= 0) {
+                loc.put("x", placed.x());
+                loc.put("y", placed.y());
+                loc.put("placed_x", EmergencyReport.round(placed.snappedX(), 2));
+                loc.put("placed_y", EmergencyReport.round(placed.snappedY(), 2));
+                loc.put("moved_m", EmergencyReport.round(placed.distanceM(), 2));
+            }
+        }
         if (!r.isolable()) root.put("reason", r.reason());
         root.set("valves_to_close", Json.strings(r.valveIds()));
         ArrayNode fb = root.putArray("fallbacks");
@@ -134,7 +152,7 @@ public final class IsolateCommand implements Callable<Integer> {
 
     private String text(Network net, Isolation.Result r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Isolation of ").append(zoneText()).append(" in ").append(net.sourceName()).append("\n\n");
+        sb.append("Isolation of ").append(zoneText()).append("\nNetwork: ").append(net.sourceName()).append("\n\n");
         if (!r.isolable()) {
             sb.append("NOT ISOLABLE BY VALVES ALONE: ").append(r.reason()).append('\n');
             if (!r.stationsToStop().isEmpty()) sb.append("  stop stations: ").append(String.join(", ", r.stationsToStop())).append('\n');
