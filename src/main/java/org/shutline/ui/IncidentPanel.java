@@ -15,9 +15,9 @@ import javax.swing.JToggleButton;
 import javax.swing.SpinnerNumberModel;
 import org.locationtech.jts.geom.Geometry;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.ResponseRates;
 import org.shutline.analysis.ResponseSizing;
-import org.shutline.analysis.Zone;
 import org.shutline.model.Severity;
 import org.shutline.model.Valve;
 import org.shutline.render.HazardMark;
@@ -26,9 +26,12 @@ import org.shutline.render.ValveToOperate;
 import org.shutline.trace.ValveSegments;
 
 /**
- * "Incident": with the pick button down, a click on the map isolates the main nearest
- * the point in the network as recorded ({@link Isolation} with {@link Zone.AtPoint}, in
- * a worker): valves to close in order, fallbacks for doubtful valves, services and
+ * "Incident": with the pick button down, a click on the map is placed on the nearest
+ * active main by {@link Placement} (the same rule as the commands: a click farther than
+ * the refusal distance, default {@value Placement#DEFAULT_MAX_DISTANCE_M} m, from every
+ * active main is refused with the distance and the network's extent) and the valve
+ * segment placed on is isolated in the network as recorded ({@link Isolation}, in a
+ * worker): the main placed on and the distance moved, valves to close in order, fallbacks for doubtful valves, services and
  * meters off, critical customers, stations to stop, and a crew estimate from
  * {@link ResponseSizing} (shut-off within 4 h, relight within 24 h, default rates).
  * The region is highlighted and the valves are numbered on the map.
@@ -40,6 +43,9 @@ final class IncidentPanel extends JPanel {
     private final MainWindow window;
     private final JToggleButton pick = new JToggleButton("Pick incident point");
     private final JSpinner crews = new JSpinner(new SpinnerNumberModel(4, 1, 200, 1));
+    private final JSpinner maxDistance = new JSpinner(new SpinnerNumberModel(Placement.DEFAULT_MAX_DISTANCE_M, 1.0, 100_000.0, 10.0));
+    private Placement placement;
+    private Workspace placementFor;
     private final JTextArea text = new JTextArea();
     private Isolation isolation;
     private Workspace isolationFor;
@@ -53,6 +59,8 @@ final class IncidentPanel extends JPanel {
         top.add(pick);
         top.add(new JLabel("crews available:"));
         top.add(crews);
+        top.add(new JLabel("refuse beyond (m):"));
+        top.add(maxDistance);
         add(top, BorderLayout.NORTH);
         add(new JScrollPane(text), BorderLayout.CENTER);
         text.setText("Press \"Pick incident point\", then click a main or a point on the map.");
@@ -66,17 +74,42 @@ final class IncidentPanel extends JPanel {
         pick.setSelected(on);
     }
 
-    /** Isolates at (x, y) in a worker and shows the result. */
+    /** A click placed and isolated, or refused ({@code isolation} null). */
+    record Outcome(Placement.Result placement, Isolation.Result isolation) {}
+
+    /** Places (x, y) and isolates the segment placed on in a worker, and shows the result or the refusal. */
     void at(double x, double y) {
         Workspace ws = window.workspace();
         if (ws == null) return;
         int crewCount = (Integer) crews.getValue();
+        double maxM = ((Number) maxDistance.getValue()).doubleValue();
         text.setText(String.format(Locale.ROOT, "Isolating at %.1f, %.1f ...", x, y));
         window.run(new Task<>("isolate", p -> {
             p.begin("isolate", 0);
-            Isolation iso = isolationFor(ws);
-            return iso.isolate(new Zone.AtPoint(x, y, null));
-        }, r -> show(ws, r, x, y, crewCount), t -> text.setText("Isolation failed: " + t.getMessage())));
+            return locate(ws, x, y, maxM);
+        }, o -> {
+            if (o.placement() instanceof Placement.Refused f) {
+                text.setText("Refused: " + f.reason() + ".\nClick on or near a main, or raise \"refuse beyond\".");
+                window.status("Incident point refused: " + f.reason());
+            } else {
+                show(ws, o.isolation(), (Placement.Placed) o.placement(), crewCount);
+            }
+        }, t -> text.setText("Isolation failed: " + t.getMessage())));
+    }
+
+    /** The engine work behind a click: placement, then the isolation of the segment placed on (none when refused). */
+    Outcome locate(Workspace ws, double x, double y, double maxM) {
+        Placement.Result pr = placementFor(ws).point(x, y, null, maxM);
+        if (pr instanceof Placement.Placed pl) return new Outcome(pl, isolationFor(ws).isolate(pl.zone()));
+        return new Outcome(pr, null);
+    }
+
+    private synchronized Placement placementFor(Workspace ws) {
+        if (placementFor != ws) {
+            placement = new Placement(ws.segments());
+            placementFor = ws;
+        }
+        return placement;
     }
 
     private synchronized Isolation isolationFor(Workspace ws) {
@@ -87,9 +120,12 @@ final class IncidentPanel extends JPanel {
         return isolation;
     }
 
-    private void show(Workspace ws, Isolation.Result r, double x, double y, int crewCount) {
+    private void show(Workspace ws, Isolation.Result r, Placement.Placed placed, int crewCount) {
+        double x = placed.x(), y = placed.y();
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "Incident at %.1f, %.1f%n", x, y));
+        sb.append("Placed ").append(placed.describe())
+                .append(String.format(Locale.ROOT, " to %.1f, %.1f%n", placed.snappedX(), placed.snappedY()));
         if (!r.isolable()) sb.append("Valves alone cannot isolate it: ").append(r.reason()).append('\n');
         sb.append("Valves to close, in order:\n");
         List<ValveToOperate> marks = new ArrayList<>();
