@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -183,13 +184,13 @@ public final class CardsCommand implements Callable<Integer> {
             for (Isolation.Fallback f : iso.fallbacks()) {
                 rows.add(List.of("  if " + f.valveId() + " will not close", "(" + f.why() + ") close "
                         + (f.thenClose().isEmpty() ? "nothing more" : String.join(", ", f.thenClose())) + "; adds "
-                        + f.addedServices().size() + " services" + (f.isolable() ? "" : "; valves alone then cannot isolate")));
+                        + Plural.of(f.addedServices().size(), "service") + (f.isolable() ? "" : "; valves alone then cannot isolate")));
             }
             iso.alternative().ifPresent(a -> rows.add(List.of("  fewer valves", String.join(", ", a.valves()) + " (adds "
                     + a.addedServices().size() + " services)")));
             ValveRoute.Result r = site.route();
             if (!r.crews().isEmpty()) rows.add(List.of("  valve time", String.format(Locale.ROOT, "%.0f min with %d crew(s)", r.elapsedMinutes(), r.crews().size())));
-            rows.add(List.of("  customers off", iso.serviceIdsOff().size() + " services, " + iso.metersOff() + " meters"));
+            rows.add(List.of("  customers off", Plural.of(iso.serviceIdsOff().size(), "service") + ", " + Plural.of(iso.metersOff(), "meter")));
             if (!site.restoration().criticalShutOff().isEmpty()) rows.add(List.of("  critical off", String.join(", ", site.restoration().criticalShutOff())));
             rows.add(List.of("  initial isolation", String.format(Locale.ROOT, "%.0f m in all directions (ERG Guide 115); no ignition sources",
                     IncidentResponse.INITIAL_ISOLATION_M)));
@@ -204,7 +205,7 @@ public final class CardsCommand implements Callable<Integer> {
                 rows.add(List.of("  station " + f.id(), "close inlet valve " + (f.inletValves().isEmpty() ? "(none recorded)" : String.join(", ", f.inletValves()))
                         + (f.name() == null ? "" : " (" + f.name() + ")")));
                 rows.add(List.of("    if it will not close", "upstream " + (f.upstream().valveIds().isEmpty() ? "(none)" : String.join(", ", f.upstream().valveIds()))
-                        + "; also puts off " + f.upstream().serviceIdsOff().size() + " services"));
+                        + "; also puts off " + Plural.of(f.upstream().serviceIdsOff().size(), "service")));
             }
             rows.add(List.of("  at risk", op.atRisk().cardinality() + " services, " + op.atRiskMeters() + " meters; check each before relight"));
             if (!op.criticalAtRisk().isEmpty()) rows.add(List.of("  critical at risk", String.join(", ", op.criticalAtRisk())));

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
@@ -204,7 +205,7 @@ final class EmergencyReport {
             for (Isolation.Fallback f : iso.fallbacks()) fallbackText(sb, "  ", f);
         }
         iso.alternative().ifPresent(a -> sb.append("Alternative with fewer valves: ").append(String.join(", ", a.valves()))
-                .append(" (adds ").append(a.addedServices().size()).append(" services, ").append(a.addedMeters()).append(" meters")
+                .append(" (adds ").append(Plural.of(a.addedServices().size(), "service")).append(", ").append(Plural.of(a.addedMeters(), "meter"))
                 .append(r.alternativeRoute().map(rt -> String.format(Locale.ROOT, "; %.0f min", rt.elapsedMinutes())).orElse(""))
                 .append(")\n"));
         routeText(sb, r.route());
@@ -218,14 +219,14 @@ final class EmergencyReport {
     static void fallbackText(StringBuilder sb, String indent, Isolation.Fallback f) {
         sb.append(indent).append(f.valveId()).append(" (").append(f.why()).append("): then close ")
                 .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
+                .append("; adds ").append(Plural.of(f.addedServices().size(), "service")).append(", ").append(Plural.of(f.addedMeters(), "meter"))
                 .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
     }
 
     static void routeText(StringBuilder sb, ValveRoute.Result r) {
         if (r.crews().isEmpty()) return;
-        sb.append(String.format(Locale.ROOT, "Valve time: %.0f min with %d crew(s), %.0f m driving%n", r.elapsedMinutes(),
-                r.crews().size(), r.driveMetres()));
+        sb.append(String.format(Locale.ROOT, "Valve time: %.0f min with %s, %.0f m driving%n", r.elapsedMinutes(),
+                Plural.of(r.crews().size(), "crew"), r.driveMetres()));
         for (ValveRoute.CrewRun c : r.crews()) {
             List<String> ids = new ArrayList<>();
             for (ValveRoute.Visit v : c.visits()) ids.add(v.valveId());
@@ -263,22 +264,25 @@ final class EmergencyReport {
             sb.append("    if it will not close: upstream valves ")
                     .append(u.valveIds().isEmpty() ? "(none)" : String.join(", ", u.valveIds()))
                     .append(u.isolable() ? "" : " (" + u.reason() + ")")
-                    .append(", which also put off ").append(u.serviceIdsOff().size()).append(" services\n");
+                    .append(", which also put off ").append(Plural.of(u.serviceIdsOff().size(), "service")).append("\n");
             for (Isolation.Fallback x : u.fallbacks()) fallbackText(sb, "      ", x);
         }
         sb.append(String.format(Locale.ROOT, "Services at risk (fed on %s): %d, meters %d; check each for damage before relight%n",
                 r.systemId(), r.atRisk().cardinality(), r.atRiskMeters()));
         criticalText(sb, net, "Critical customers at risk (first)", r.criticalAtRisk());
-        sb.append(String.format(Locale.ROOT, "Off gas after the shut-off: %d services, %d meters%n", r.off().cardinality(), r.metersOff()));
+        sb.append(String.format(Locale.ROOT, "Off gas after the shut-off: %s, %s%n", Plural.of(r.off().cardinality(), "service"),
+                Plural.of(r.metersOff(), "meter")));
     }
 
     static void responseText(StringBuilder sb, Restoration.Result r, ResponseSettings s) {
         ResponseSizing.Result z = r.sizing();
-        sb.append(String.format(Locale.ROOT, "Shut-off: %d meters, %.1f technician-hours; %d technicians (%d crews) to finish in %.1f h; %.1f h with %d crews%n",
-                r.metersShutOff(), z.shutoffTechHours(), z.shutoffTechs(), z.shutoffCrews(), s.targetHours(), z.shutoffHoursWithCrews(), z.crews()));
-        sb.append(String.format(Locale.ROOT, "Relight: %d meters (%.0f visits with %.0f %% second visits), %.1f technician-hours; %d technicians (%d crews) to finish in %.1f h; %.1f h with %d crews%n",
-                r.metersRelight(), z.relightVisits(), s.rates().secondVisitFraction() * 100, z.relightTechHours(), z.relightTechs(),
-                z.relightCrews(), s.relightTargetHours(), z.relightHoursWithCrews(), z.crews()));
+        sb.append(String.format(Locale.ROOT, "Shut-off: %s, %.1f technician-hours; %s (%s) to finish in %.1f h; %.1f h with %s%n",
+                Plural.of(r.metersShutOff(), "meter"), z.shutoffTechHours(), Plural.of(z.shutoffTechs(), "technician"),
+                Plural.of(z.shutoffCrews(), "crew"), s.targetHours(), z.shutoffHoursWithCrews(), Plural.of(z.crews(), "crew")));
+        sb.append(String.format(Locale.ROOT, "Relight: %s (%.0f visits with %.0f %% second visits), %.1f technician-hours; %s (%s) to finish in %.1f h; %.1f h with %s%n",
+                Plural.of(r.metersRelight(), "meter"), z.relightVisits(), s.rates().secondVisitFraction() * 100, z.relightTechHours(),
+                Plural.of(z.relightTechs(), "technician"), Plural.of(z.relightCrews(), "crew"), s.relightTargetHours(),
+                z.relightHoursWithCrews(), Plural.of(z.crews(), "crew")));
         if (r.purge()) {
             sb.append("District(s) left dead: ").append(String.join(", ", r.deadSystems()))
                     .append(": purge the mains and relight every service of the district\n");
@@ -289,7 +293,8 @@ final class EmergencyReport {
         if (w.packages().isEmpty()) return;
         sb.append("Work packages (by map sheet, along streets):\n");
         for (WorkPackages.Package p : w.packages()) {
-            sb.append(String.format(Locale.ROOT, "  crew %d  %-24s %4d services %5d meters%n", p.crew(), p.sheet(), p.visits().size(), p.meters()));
+            sb.append(String.format(Locale.ROOT, "  crew %d  %-24s %4d %-8s %5d %s%n", p.crew(), p.sheet(), p.visits().size(),
+                    Plural.noun(p.visits().size(), "service"), p.meters(), Plural.noun(p.meters(), "meter")));
             int n = 0;
             for (WorkPackages.Visit v : p.visits()) {
                 if (n++ >= maxPerPackage) {

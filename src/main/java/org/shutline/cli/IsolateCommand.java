@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
@@ -170,12 +171,12 @@ public final class IsolateCommand implements Callable<Integer> {
             for (Isolation.Fallback f : r.fallbacks()) {
                 sb.append("  ").append(f.valveId()).append(" (").append(f.why()).append("): then close ")
                         .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                        .append("; adds ").append(f.addedServices().size()).append(" services, ").append(f.addedMeters()).append(" meters")
+                        .append("; adds ").append(Plural.of(f.addedServices().size(), "service")).append(", ").append(Plural.of(f.addedMeters(), "meter"))
                         .append(f.isolable() ? "" : "; valves alone then cannot isolate").append('\n');
             }
         }
         r.alternative().ifPresent(a -> sb.append("\nAlternative with fewer valves: ").append(String.join(", ", a.valves()))
-                .append(" (adds ").append(a.addedServices().size()).append(" services)\n"));
+                .append(" (adds ").append(Plural.of(a.addedServices().size(), "service")).append(")\n"));
         sb.append(String.format(Locale.ROOT, "%nServices off %d, meters off %d, unintended segments %d%n", r.serviceIdsOff().size(), r.metersOff(),
                 r.unintended().cardinality()));
         if (!r.criticalOff().isEmpty()) sb.append("Critical customers off: ").append(String.join(", ", r.criticalOff())).append('\n');

@@ -244,7 +244,7 @@ public final class Identify {
                 meters += segs.meters(g);
                 services += segs.serviceCount(g);
             }
-            out.add("valve segment " + String.join(", ", segIds) + ": " + services + " services, " + meters + " meters");
+            out.add("valve segment " + String.join(", ", segIds) + ": " + org.shutline.model.Plural.of(services, "service") + ", " + org.shutline.model.Plural.of(meters, "meter"));
             out.add("valves bounding it: " + (valves.isEmpty() ? "none" : String.join(", ", valves)));
         }
         TreeSet<String> feeding = new TreeSet<>();

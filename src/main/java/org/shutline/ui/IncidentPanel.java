@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.model.Plural;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.time.LocalDate;
@@ -141,7 +142,7 @@ final class IncidentPanel extends JPanel {
         for (Isolation.Fallback f : r.fallbacks()) {
             sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): close ")
                     .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                    .append(", adding ").append(f.addedServices().size()).append(" services\n");
+                    .append(", adding ").append(Plural.of(f.addedServices().size(), "service")).append("\n");
         }
         if (!r.stationsToStop().isEmpty()) {
             sb.append("Stations to stop: ").append(String.join(", ", r.stationsToStop()))
@@ -152,10 +153,11 @@ final class IncidentPanel extends JPanel {
         int meters = (int) Math.min(Integer.MAX_VALUE, r.metersOff());
         ResponseSizing.Result z = ResponseSizing.size(meters, meters, SHUTOFF_TARGET_H, RELIGHT_TARGET_H, crewCount, ResponseRates.DEFAULT);
         sb.append(String.format(Locale.ROOT,
-                "Crew estimate (default rates): shut-off %.1f tech-hours, %d crews to finish in %.0f h; relight %.1f tech-hours, %d crews in %.0f h.%n"
-                        + "With %d crews: shut-off %.1f h, relight %.1f h.%n",
-                z.shutoffTechHours(), z.shutoffCrews(), SHUTOFF_TARGET_H, z.relightTechHours(), z.relightCrews(), RELIGHT_TARGET_H,
-                crewCount, z.shutoffHoursWithCrews(), z.relightHoursWithCrews()));
+                "Crew estimate (default rates): shut-off %.1f tech-hours, %s to finish in %.0f h; relight %.1f tech-hours, %s in %.0f h.%n"
+                        + "With %s: shut-off %.1f h, relight %.1f h.%n",
+                z.shutoffTechHours(), Plural.of(z.shutoffCrews(), "crew"), SHUTOFF_TARGET_H, z.relightTechHours(),
+                Plural.of(z.relightCrews(), "crew"), RELIGHT_TARGET_H, Plural.of(crewCount, "crew"), z.shutoffHoursWithCrews(),
+                z.relightHoursWithCrews()));
         text.setText(sb.toString());
         text.setCaretPosition(0);
         List<Geometry> region = new ArrayList<>();
@@ -168,6 +170,6 @@ final class IncidentPanel extends JPanel {
         MapOverlays o = MapOverlays.NONE.withValvesToOperate(marks)
                 .withHazards(List.of(HazardMark.of(x, y, Severity.CRITICAL, "incident")));
         window.showPanelMarks(o, region);
-        window.status(String.format(Locale.ROOT, "Incident: %d valves to close, %d services off", r.valves().size(), r.serviceIdsOff().size()));
+        window.status("Incident: " + Plural.of(r.valves().size(), "valve") + " to close, " + Plural.of(r.serviceIdsOff().size(), "service") + " off");
     }
 }

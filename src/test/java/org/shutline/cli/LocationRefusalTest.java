@@ -107,4 +107,15 @@ class LocationRefusalTest {
         CommandsTest.Run ok = run("incident", NET, "--main", "M-IP-007", "--as-of", "2026-12-01");
         assertThat(ok.out()).contains("Placed on main M-IP-007 (IP-1)");
     }
+
+    @Test
+    void oneIsSingularInTheIncidentText() {
+        // M-CI-01 (Elder Street, LP-SOUTH): 7 services, 10 meters; 10 meters / 10 per technician-hour = 1.0
+        // technician-hour, one technician in one crew (common-practice rates, ResponseRates.DEFAULT)
+        CommandsTest.Run r = run("incident", NET, "--main", "M-CI-01", "--crews", "1", "--as-of", "2026-12-01");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("with 1 crew,").contains("1 technician (1 crew) to finish")
+                .contains("h with 1 crew\n").contains("1 service ").doesNotContain("1 crews").doesNotContain("1 technicians")
+                .doesNotContain("crew(s)");
+    }
 }
