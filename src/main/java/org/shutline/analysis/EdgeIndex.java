@@ -21,7 +21,7 @@ final class EdgeIndex {
     private final ValveSegments segs;
     private final NetworkState s;
     private final STRtree tree = new STRtree();
-    private final double span;
+    private final Envelope extent;
 
     EdgeIndex(ValveSegments segs) {
         this.segs = segs;
@@ -36,7 +36,12 @@ final class EdgeIndex {
             tree.insert(env, e);
         }
         tree.build();
-        span = Math.max(1.0, Math.max(all.getWidth(), all.getHeight()));
+        extent = all;
+    }
+
+    /** The envelope of every indexed edge (null envelope when there is none); a copy. */
+    Envelope extent() {
+        return new Envelope(extent);
     }
 
     /** Pipe edges whose envelope meets {@code env}. */
@@ -47,14 +52,35 @@ final class EdgeIndex {
 
     /**
      * The edge nearest (x, y) on an active main (of system {@code systemId} when not null),
-     * exact ties to the lower main id; -1 when there is none. Searches growing squares
-     * around the point (exact ties then to the lower edge index); a candidate at distance d found inside a square of half-side
-     * r >= d is nearest, since anything nearer meets the square.
+     * exact ties to the lower main id (then the lower edge index); -1 when there is none. See {@link #nearestHit}.
      */
     int nearest(double x, double y, String systemId) {
+        return nearestHit(x, y, systemId).edge();
+    }
+
+    /** An edge and its distance from the query point (CRS units); edge -1 and distance NaN when there is none. */
+    record Hit(int edge, double distance) {
+        static final Hit NONE = new Hit(-1, Double.NaN);
+    }
+
+    /**
+     * The edge nearest (x, y), as {@link #nearest}, with its distance. Searches growing
+     * squares around the point, starting at the distance from the point to the extent
+     * of all edges: a candidate at distance d found inside a square of half-side r >= d
+     * is nearest, since anything nearer meets the square. The search stops at the
+     * latest when the square covers the whole extent, so it ends for every finite
+     * input, however far (at most about 520 rounds, r growing fourfold up to the
+     * largest double); a non-finite coordinate finds nothing.
+     */
+    Hit nearestHit(double x, double y, String systemId) {
+        if (!Double.isFinite(x) || !Double.isFinite(y) || extent.isNull()) return Hit.NONE;
         Point p = GF.createPoint(new Coordinate(x, y));
-        for (double r = 1.0; ; r *= 4) {
-            List<Integer> cands = query(new Envelope(x - r, x + r, y - r, y + r));
+        double cover = Math.max(Math.max(Math.abs(x - extent.getMinX()), Math.abs(x - extent.getMaxX())),
+                Math.max(Math.abs(y - extent.getMinY()), Math.abs(y - extent.getMaxY())));
+        double r = Math.max(1.0, extent.distance(new Envelope(x, x, y, y)));
+        while (true) {
+            boolean all = r >= cover;
+            List<Integer> cands = all ? query(extent) : query(new Envelope(x - r, x + r, y - r, y + r));
             int bestEdge = -1;
             double best = Double.POSITIVE_INFINITY;
             String bestId = null;
@@ -71,8 +97,9 @@ final class EdgeIndex {
                     bestEdge = e;
                 }
             }
-            if (bestEdge >= 0 && best <= r) return bestEdge;
-            if (r > 4 * span + Math.abs(x) + Math.abs(y)) return bestEdge;
+            if (bestEdge >= 0 && (best <= r || all)) return new Hit(bestEdge, best);
+            if (all) return Hit.NONE;
+            r = r * 4;
         }
     }
 

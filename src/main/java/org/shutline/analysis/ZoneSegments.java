@@ -58,6 +58,7 @@ final class ZoneSegments {
 
     /** The active pipe edge nearest the point, on the nearest active main; -1 when there is none. */
     static int nearestEdge(NetworkState s, ValveSegments segs, Zone.AtPoint z) {
+        if (!Double.isFinite(z.x()) || !Double.isFinite(z.y())) return -1;
         Point p = GF.createPoint(new Coordinate(z.x(), z.y()));
         int bestEdge = -1;
         double best = Double.POSITIVE_INFINITY;

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -188,7 +189,7 @@ public final class CardsCommand implements Callable<Integer> {
                     + a.addedServices().size() + " services)")));
             ValveRoute.Result r = site.route();
             if (!r.crews().isEmpty()) rows.add(List.of("  valve time", String.format(Locale.ROOT, "%.0f min with %d crew(s)", r.elapsedMinutes(), r.crews().size())));
-            rows.add(List.of("  customers off", iso.serviceIdsOff().size() + " services, " + iso.metersOff() + " meters"));
+            rows.add(List.of("  customers off", Plural.of(iso.serviceIdsOff().size(), "service") + ", " + Plural.of(iso.metersOff(), "meter")));
             if (!site.restoration().criticalShutOff().isEmpty()) rows.add(List.of("  critical off", String.join(", ", site.restoration().criticalShutOff())));
             rows.add(List.of("  initial isolation", String.format(Locale.ROOT, "%.0f m in all directions (ERG Guide 115); no ignition sources",
                     IncidentResponse.INITIAL_ISOLATION_M)));
@@ -204,7 +205,7 @@ public final class CardsCommand implements Callable<Integer> {
                         + (f.stop().stoppable() ? "" : " (valves alone cannot stop it)") + (f.name() == null ? "" : " (" + f.name() + ")")));
                 if (!f.stop().note().isEmpty()) rows.add(List.of("    note", f.stop().note()));
                 rows.add(List.of("    also", (f.stop().alsoStopped().isEmpty() ? "stops no other station" : "stops " + String.join(", ", f.stop().alsoStopped()))
-                        + "; " + f.stop().otherOff().cardinality() + " services off besides the station's own district"));
+                        + "; " + Plural.of(f.stop().otherOff().cardinality(), "service") + " off besides the station's own district"));
                 for (Isolation.Fallback x : f.upstream().fallbacks()) {
                     rows.add(List.of("    if " + x.valveId() + " will not close", "(" + x.why() + ") " + org.shutline.report.ReportView.fallbackText(x)));
                 }

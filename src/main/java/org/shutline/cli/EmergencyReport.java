@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
@@ -245,7 +246,7 @@ final class EmergencyReport {
         }
         if (r.order().steps().isEmpty()) sb.append("  (none)\n");
         iso.alternative().ifPresent(a -> sb.append("Alternative with fewer valves: ").append(String.join(", ", a.valves()))
-                .append(" (adds ").append(a.addedServices().size()).append(" services, ").append(a.addedMeters()).append(" meters")
+                .append(" (adds ").append(Plural.of(a.addedServices().size(), "service")).append(", ").append(Plural.of(a.addedMeters(), "meter"))
                 .append(r.alternativeRoute().map(rt -> String.format(Locale.ROOT, "; %.0f min", rt.elapsedMinutes())).orElse(""))
                 .append(")\n"));
         routeText(sb, r.route());
@@ -263,8 +264,8 @@ final class EmergencyReport {
 
     static void routeText(StringBuilder sb, ValveRoute.Result r) {
         if (r.crews().isEmpty()) return;
-        sb.append(String.format(Locale.ROOT, "Valve time: %.0f min with %d crew(s), %.0f m driving%n", r.elapsedMinutes(),
-                r.crews().size(), r.driveMetres()));
+        sb.append(String.format(Locale.ROOT, "Valve time: %.0f min with %s, %.0f m driving%n", r.elapsedMinutes(),
+                Plural.of(r.crews().size(), "crew"), r.driveMetres()));
         for (ValveRoute.CrewRun c : r.crews()) {
             List<String> ids = new ArrayList<>();
             for (ValveRoute.Visit v : c.visits()) ids.add(v.valveId());
@@ -309,14 +310,15 @@ final class EmergencyReport {
             if (!stop.note().isEmpty()) sb.append("    ").append(stop.note()).append('\n');
             sb.append("    this also ").append(stop.alsoStopped().isEmpty() ? "stops no other station"
                     : "stops station " + String.join(", ", stop.alsoStopped()))
-                    .append(" and puts off ").append(stop.otherOff().cardinality()).append(" services besides the station's own district (")
+                    .append(" and puts off ").append(Plural.of(stop.otherOff().cardinality(), "service")).append(" besides the station's own district (")
                     .append(stop.ownDistrict().cardinality()).append(")\n");
             for (Isolation.Fallback x : f.upstream().fallbacks()) fallbackText(sb, "      ", x);
         }
         sb.append(String.format(Locale.ROOT, "Services at risk (fed on %s): %d, meters %d; check each for damage before relight%n",
                 r.systemId(), r.atRisk().cardinality(), r.atRiskMeters()));
         criticalText(sb, net, "Critical customers at risk (first)", r.criticalAtRisk());
-        sb.append(String.format(Locale.ROOT, "Off gas after the shut-off: %d services, %d meters%n", r.off().cardinality(), r.metersOff()));
+        sb.append(String.format(Locale.ROOT, "Off gas after the shut-off: %s, %s%n", Plural.of(r.off().cardinality(), "service"),
+                Plural.of(r.metersOff(), "meter")));
     }
 
     static void responseText(StringBuilder sb, Restoration.Result r, ResponseSettings s) {
@@ -328,19 +330,19 @@ final class EmergencyReport {
         ResponseSizing.Result z = r.sizing();
         int crews = wp == null || wp.packages().isEmpty() ? z.crews() : wp.packages().size();
         double techs = crews * (double) s.rates().techsPerCrew();
-        sb.append(String.format(Locale.ROOT, "Shut-off: %d meters, %.1f technician-hours; %d technicians (%d crews of %d) needed to finish in %.1f h%n",
-                r.metersShutOff(), z.shutoffTechHours(), z.shutoffTechs(), z.shutoffCrews(), s.rates().techsPerCrew(), s.targetHours()));
+        sb.append(String.format(Locale.ROOT, "Shut-off: %s, %.1f technician-hours; %s needed to finish in %.1f h (%s of %d)%n",
+                Plural.of(r.metersShutOff(), "meter"), z.shutoffTechHours(), Plural.of(z.shutoffTechs(), "technician"), s.targetHours(), Plural.of(z.shutoffCrews(), "crew"), s.rates().techsPerCrew()));
         if (z.crewsComputed()) {
-            sb.append(String.format(Locale.ROOT, "  crews: %d, computed from the %.1f h target%s; %.1f h with %d crews%n", crews, s.targetHours(),
+            sb.append(String.format(Locale.ROOT, "  crews: %d, computed from the %.1f h target%s; %.1f h with %s%n", crews, s.targetHours(),
                     wp != null && wp.extraCrews() > 0 ? " (" + wp.extraCrews() + " more than the arithmetic: the premises do not divide evenly along streets)" : "",
-                    z.shutoffTechHours() / techs, crews));
+                    z.shutoffTechHours() / techs, Plural.of(crews, "crew")));
         } else {
-            sb.append(String.format(Locale.ROOT, "  crews: %d, as given; %.1f h with %d crews%s%n", crews, z.shutoffTechHours() / techs, crews,
+            sb.append(String.format(Locale.ROOT, "  crews: %d, as given; %.1f h with %s%s%n", crews, z.shutoffTechHours() / techs, Plural.of(crews, "crew"),
                     z.shutoffTechHours() / techs > s.targetHours() + 1e-9 ? String.format(Locale.ROOT, " (over the %.1f h target)", s.targetHours()) : ""));
         }
-        sb.append(String.format(Locale.ROOT, "Relight: %d meters (%.0f visits with %.0f %% second visits), %.1f technician-hours; %d technicians (%d relight crews, sized separately) to finish in %.1f h; %.1f h with %d crews%n",
-                r.metersRelight(), z.relightVisits(), s.rates().secondVisitFraction() * 100, z.relightTechHours(), z.relightTechs(),
-                z.relightCrews(), s.relightTargetHours(), z.relightTechHours() / techs, crews));
+        sb.append(String.format(Locale.ROOT, "Relight: %s (%.0f visits with %.0f %% second visits), %.1f technician-hours; %s (%d relight %s, sized separately) to finish in %.1f h; %.1f h with %s%n",
+                Plural.of(r.metersRelight(), "meter"), z.relightVisits(), s.rates().secondVisitFraction() * 100, z.relightTechHours(), Plural.of(z.relightTechs(), "technician"),
+                z.relightCrews(), Plural.noun(z.relightCrews(), "crew"), s.relightTargetHours(), z.relightTechHours() / techs, Plural.of(crews, "crew")));
         if (r.purge()) {
             sb.append("District(s) left dead: ").append(String.join(", ", r.deadSystems()))
                     .append(": purge the mains and relight every service of the district\n");
@@ -353,7 +355,7 @@ final class EmergencyReport {
                 w.packages().size(), w.maxHours(), w.crewsComputed() ? String.format(Locale.ROOT, "; target %.1f h", w.targetHours()) : ""));
         if (w.overTarget() > 0) sb.append("  ").append(w.overTarget()).append(" package(s) over the target: a single premises needs more than one crew's target hours\n");
         for (WorkPackages.Package p : w.packages()) {
-            sb.append(String.format(Locale.ROOT, "  crew %d  %4d services %5d meters %5.1f h  %s%s%n", p.crew(), p.visits().size(), p.meters(), p.hours(),
+            sb.append(String.format(Locale.ROOT, "  crew %d  %4d %-8s %5d %-6s %5.1f h  %s%s%n", p.crew(), p.visits().size(), Plural.noun(p.visits().size(), "service"), p.meters(), Plural.noun(p.meters(), "meter"), p.hours(),
                     p.sheet(), p.criticalCount() > 0 ? "  (" + p.criticalCount() + " critical first)" : ""));
             if (!p.streets().isEmpty()) sb.append("      streets: ").append(String.join(", ", p.streets())).append('\n');
             int n = 0;

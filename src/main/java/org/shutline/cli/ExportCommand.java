@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
@@ -40,20 +41,19 @@ import picocli.CommandLine.Spec;
  * {@link ReportBuilder} (see there for the files). The isolation circle of an incident
  * at a point defaults to 100 m, the initial isolation distance of the Emergency
  * Response Guidebook (2024), Guide 115 (natural gas). Exit 0 when written, 2 for bad
- * input, a bad option, an incident point more than {@link #FAR_M} m outside the mains'
- * envelope, or an output path that is an input file.
+ * input, a bad option, an incident point refused by {@link Locations} (farther than
+ * {@code --max-distance-m} from every active main), or an output path that is an input file.
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
     description = "Write maps (PDF, PNG, SVG), map book, valve and customer lists and result layers of a plan step or an incident.")
 public final class ExportCommand implements Callable<Integer> {
-    /** An incident point farther than this many metres outside the envelope of the mains is refused as a likely typo. */
-    static final double FAR_M = 1000;
 
     static final class Where {
         @Option(names = "--plan", paramLabel = "PLAN", description = "a work plan (YAML); with --step")
         Path plan;
 
-        @Option(names = "--at", paramLabel = "X,Y", split = ",", description = "an incident at a point in the network CRS")
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", converter = Locations.FiniteNumber.class,
+            description = "an incident at a point in the network CRS; placed on the nearest active main")
         double[] at;
 
         @Option(names = "--main", paramLabel = "ID", description = "an incident on a main")
@@ -104,6 +104,10 @@ public final class ExportCommand implements Callable<Integer> {
 
     @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
     private String system;
+
+    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
+        description = "with --at: refuse a point farther than this from every active main (default: ${DEFAULT-VALUE})")
+    private double maxDistanceM;
 
     @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
     private Path mapping;
@@ -172,27 +176,20 @@ public final class ExportCommand implements Callable<Integer> {
     }
 
     private ReportView incident(Topology t, Isolation.Options iso) {
-        if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
-            throw new IllegalArgumentException("export: no main with id '" + where.main + "' in " + network);
-        }
-        if (where.at != null) {
-            org.locationtech.jts.geom.Envelope ext = new org.locationtech.jts.geom.Envelope();
-            for (var m : t.network().mains()) if (m.geometry() != null) ext.expandToInclude(m.geometry().getEnvelopeInternal());
-            double reach = t.network().crs().unit().fromMetres(FAR_M);
-            if (ext.isNull() || ext.distance(new org.locationtech.jts.geom.Envelope(where.at[0], where.at[0], where.at[1], where.at[1])) > reach) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
-                        "export: the point %.1f, %.1f is more than %.0f m outside the network's mains (CRS %s); check the coordinates",
-                        where.at[0], where.at[1], FAR_M, t.network().crs().name()));
-            }
-        }
-        Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         NetworkState base = NetworkState.of(t);
-        ValveSegments baseSegs = ValveSegments.build(base);
+        ValveSegments segs = ValveSegments.build(base);
+        Placement pl = new Placement(segs);
+        Locations.Located loc;
+        try {
+            loc = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, system, maxDistanceM);
+        } catch (Locations.Refusal e) {
+            throw new IllegalArgumentException("export: " + e.getMessage(), e);
+        }
+        Zone zone = loc.zone();
         // the same field order (crews' routes, doubtful valves first) and crews as `incident` with its defaults
-        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(baseSegs, iso, zone,
+        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(segs, iso, zone,
                 org.shutline.analysis.ResponseSettings.DEFAULT);
-        org.shutline.analysis.InstructionCheck.verify(baseSegs, r.isolation(), "export " + (where.main != null ? "main " + where.main
-                : String.format(Locale.ROOT, "point %.1f,%.1f", where.at[0], where.at[1])));
+        org.shutline.analysis.InstructionCheck.verify(segs, r.isolation(), "export " + loc.label());
         String subject = where.main != null ? "Incident on main " + where.main
                 : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],
                     system == null ? "" : " (" + system + ")");

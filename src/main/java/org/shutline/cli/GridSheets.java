@@ -57,26 +57,26 @@ final class GridSheets {
     }
 
     /**
+     * A typed reference's cell: the network point of its centre and the cell's side in
+     * metres (1 m to 100 km by the digit count; a grid zone alone, "15T", has no square
+     * and is given as {@link Integer#MAX_VALUE}).
+     */
+    record Cell(double x, double y, int sizeM, String text) {}
+
+    /**
      * The network point of a typed reference: the centre of the cell it names (a
-     * reference names a cell of 1 m to 10 km by its digit count; its south-west corner
-     * is what the grid library returns, half a cell is added each way).
+     * reference names a cell of 1 m to 100 km by its digit count; the grid library returns
+     * its south-west corner, and half a cell is added each way), with the cell's size.
      *
      * @throws IllegalArgumentException when the text is not a reference or the network has no transform
      */
-    double[] locate(String text) {
+    Cell locate(String text) {
         if (geo == null) throw new IllegalArgumentException("the network's CRS is unknown: grid references cannot be used");
         GridReference sw = GridReference.parse(text);
-        String compact = text.replaceAll("\\s+", "");
-        int digitsAfterSquare = 0;
-        for (int i = compact.length() - 1; i >= 0 && Character.isDigit(compact.charAt(i)); i--) digitsAfterSquare++;
-        int half = 0;
-        if (digitsAfterSquare > 0 && digitsAfterSquare % 2 == 0 && digitsAfterSquare <= 10) {
-            half = GridReference.Precision.ofDigits(digitsAfterSquare / 2).metres() / 2;
-        }
-        GridReference c = new GridReference(sw.zone(), sw.band(), sw.column(), sw.row(),
-                Math.min(99_999, sw.easting() + half), Math.min(99_999, sw.northing() + half));
-        double[] ll = c.toLonLat();
-        Point2D p = geo.fromLonLat(ll[0], ll[1]);
-        return new double[] {p.getX(), p.getY()};
+        String compact = text.replaceAll("\\s+", "").toUpperCase(java.util.Locale.ROOT);
+        int size = GridReference.cellMetres(text);
+        if (size == 0) return new Cell(Double.NaN, Double.NaN, Integer.MAX_VALUE, compact);
+        Point2D p = geo.fromGridReference(sw, size / 2.0, size / 2.0);
+        return new Cell(p.getX(), p.getY(), size, compact);
     }
 }

@@ -11,6 +11,7 @@ import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.InstructionCheck;
 import org.shutline.analysis.OverpressureShutoff;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.ResponseRates;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.Restoration;
@@ -50,7 +51,8 @@ public final class IncidentCommand implements Callable<Integer> {
     enum Kind { leak, damage, overpressure }
 
     static final class Where {
-        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", description = "a point in the network CRS")
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", converter = Locations.FiniteNumber.class,
+            description = "a point in the network CRS; placed on the nearest active main")
         double[] at;
 
         @Option(names = "--main", paramLabel = "ID", description = "a main id")
@@ -77,6 +79,9 @@ public final class IncidentCommand implements Callable<Integer> {
     @Option(names = "--system", paramLabel = "ID", description = "pressure system: with --at or --usng the nearest main of it; for overpressure the system")
     private String system;
 
+    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
+        description = "refuse a place farther than this from every active main, and a grid cell larger (default: ${DEFAULT-VALUE})")
+    private double maxDistanceM;
     @Option(names = "--crews", paramLabel = "N", description = "crews available (default: computed from --target-hours)")
     private Integer crews;
 
@@ -104,8 +109,6 @@ public final class IncidentCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     private Format format;
 
-    /** Where the incident is: the zone and a point for the work lists and grid reference (NaN when only a main is given). */
-    record Place(Zone zone, double x, double y, String label) {}
 
     @Override
     public Integer call() {
@@ -127,11 +130,11 @@ public final class IncidentCommand implements Callable<Integer> {
         Network net = t.network();
         GridSheets grid = GridSheets.of(net.crs());
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
-        Place place;
+        Locations.Located place;
         try {
             place = place(net, segs, grid, err);
-        } catch (IllegalArgumentException e) {
-            return NetworkInput.badInput(err, e.getMessage());
+        } catch (Locations.Refusal e) {
+            return NetworkInput.badInput(err, "incident: " + e.getMessage());
         }
         if (place == null) return 2;
         Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
@@ -146,12 +149,20 @@ public final class IncidentCommand implements Callable<Integer> {
             loc.put("y", EmergencyReport.round(place.y(), 2));
             loc.put("usng", grid.reference(place.x(), place.y()));
         }
+        loc.put("main", place.placed().mainId());
+        if (place.placed().systemId() != null) loc.put("main_system", place.placed().systemId());
+        if (place.placed().edge() >= 0) {
+            loc.put("placed_x", EmergencyReport.round(place.placed().snappedX(), 2));
+            loc.put("placed_y", EmergencyReport.round(place.placed().snappedY(), 2));
+            loc.put("moved_m", EmergencyReport.round(place.placed().distanceM(), 2));
+        }
         sb.append("Incident: ").append(kind.name()).append(" at ").append(place.label());
         if (!Double.isNaN(place.x())) {
             String ref = grid.reference(place.x(), place.y());
             sb.append(String.format(Locale.ROOT, " (%.1f, %.1f%s)", place.x(), place.y(), ref.isEmpty() ? "" : "; USNG " + ref));
         }
-        sb.append("\nNetwork: ").append(net.sourceName()).append("\n\n");
+        sb.append('\n').append(place.placedText()).append('\n');
+        sb.append("Network: ").append(net.sourceName()).append("\n\n");
         Restoration.Result rest;
         java.util.BitSet workSet;
         if (kind == Kind.overpressure) {
@@ -189,41 +200,12 @@ public final class IncidentCommand implements Callable<Integer> {
         return 0;
     }
 
-    private Place place(Network net, ValveSegments segs, GridSheets grid, PrintWriter err) {
-        if (where.at != null) {
-            if (where.at.length != 2) throw new IllegalArgumentException("incident: --at takes X,Y");
-            return new Place(new Zone.AtPoint(where.at[0], where.at[1], system), where.at[0], where.at[1],
-                    String.format(Locale.ROOT, "point %.1f,%.1f", where.at[0], where.at[1]));
-        }
-        if (where.main != null) {
-            if (net.mains().stream().noneMatch(m -> m.id().equals(where.main))) {
-                throw new IllegalArgumentException("incident: no main with id '" + where.main + "' in " + network);
-            }
-            return new Place(Zone.main(where.main), Double.NaN, Double.NaN, "main " + where.main);
-        }
-        if (where.usng != null) {
-            double[] p = grid.locate(where.usng);
-            return new Place(new Zone.AtPoint(p[0], p[1], system), p[0], p[1], "USNG " + where.usng.trim());
-        }
-        List<Integer> found = Addresses.find(net, where.address);
-        if (found.isEmpty()) throw new IllegalArgumentException("incident: no service with an address matching '" + where.address + "'");
-        if (found.size() > 1) {
-            err.println("incident: the address '" + where.address + "' matches " + found.size() + " services; give one of:");
-            for (int i = 0; i < Math.min(found.size(), 30); i++) {
-                Service s = net.services().get(found.get(i));
-                err.println("  " + s.id() + "  " + s.address());
-            }
-            if (found.size() > 30) err.println("  ... and " + (found.size() - 30) + " more");
-            err.flush();
-            return null;
-        }
-        int i = found.get(0);
-        Service s = net.services().get(i);
-        int seg = segs.serviceSegment(i);
-        if (seg < 0) throw new IllegalArgumentException("incident: service " + s.id() + " (" + s.address() + ") is not attached to active pipe");
-        double x = s.geometry() == null ? Double.NaN : s.geometry().getX();
-        double y = s.geometry() == null ? Double.NaN : s.geometry().getY();
-        return new Place(new Zone.OfSegments(new int[] {seg}), x, y, "address " + s.address() + " (service " + s.id() + ")");
+    private Locations.Located place(Network net, ValveSegments segs, GridSheets grid, PrintWriter err) throws Locations.Refusal {
+        Placement pl = new Placement(segs);
+        if (where.at != null) return Locations.at(pl, where.at, system, maxDistanceM);
+        if (where.main != null) return Locations.main(pl, where.main);
+        if (where.usng != null) return Locations.usng(pl, grid, where.usng, system, maxDistanceM);
+        return Locations.address(pl, net, where.address, "incident", err);
     }
 
     private static int fail(PrintWriter err, String message) {

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
@@ -12,6 +13,7 @@ import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ValveOrder;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
@@ -39,7 +41,8 @@ public final class IsolateCommand implements Callable<Integer> {
     enum Format { text, json }
 
     static final class Where {
-        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", description = "a point in the network CRS; the nearest active main is taken")
+        @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", converter = Locations.FiniteNumber.class,
+            description = "a point in the network CRS; placed on the nearest active main")
         double[] at;
 
         @Option(names = "--main", paramLabel = "ID", description = "a main id")
@@ -57,6 +60,10 @@ public final class IsolateCommand implements Callable<Integer> {
     @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
     private String system;
 
+    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
+        description = "with --at: refuse a point farther than this from every active main (default: ${DEFAULT-VALUE})")
+    private double maxDistanceM;
+
     @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
     private Path mapping;
 
@@ -65,6 +72,8 @@ public final class IsolateCommand implements Callable<Integer> {
 
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     private Format format;
+
+    private Locations.Located located;
 
     @Override
     public Integer call() {
@@ -76,14 +85,14 @@ public final class IsolateCommand implements Callable<Integer> {
         } catch (InputException e) {
             return NetworkInput.badInput(err, e.getMessage());
         }
-        if (where.at != null && where.at.length != 2) {
-            return NetworkInput.badInput(err, "isolate: --at takes X,Y");
-        }
-        if (where.main != null && t.network().mains().stream().noneMatch(m -> m.id().equals(where.main))) {
-            return NetworkInput.badInput(err, "isolate: no main with id '" + where.main + "' in " + network);
-        }
-        Zone zone = where.main != null ? Zone.main(where.main) : new Zone.AtPoint(where.at[0], where.at[1], system);
         ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        Placement pl = new Placement(segs);
+        try {
+            located = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, system, maxDistanceM);
+        } catch (Locations.Refusal e) {
+            return NetworkInput.badInput(err, "isolate: " + e.getMessage());
+        }
+        Zone zone = located.zone();
         Isolation.Result r;
         ValveOrder.Result order;
         try {
@@ -96,19 +105,29 @@ public final class IsolateCommand implements Callable<Integer> {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
         org.shutline.analysis.InstructionCheck.verify(segs, r, "isolate " + zoneText());
-        out.print(format == Format.json ? Json.write(json(t.network(), r, order)) : text(t.network(), r, order));
+        out.print(format == Format.json ? Json.write(json(t.network(), r, order, located.placed())) : text(t.network(), r, order));
         out.flush();
         return 0;
     }
 
     private String zoneText() {
-        return where.main != null ? "main " + where.main
-                : String.format(Locale.ROOT, "point (%.1f, %.1f)%s", where.at[0], where.at[1], system == null ? "" : " on " + system);
+        return located.label() + (where.main == null && system != null ? " on " + system : "") + "\n" + located.placedText();
     }
 
-    static ObjectNode json(Network net, Isolation.Result r, ValveOrder.Result order) {
+    static ObjectNode json(Network net, Isolation.Result r, ValveOrder.Result order, Placement.Placed placed) {
         ObjectNode root = Json.object();
         root.put("isolable", r.isolable());
+        if (placed != null) {
+            ObjectNode loc = root.putObject("location");
+            loc.put("main", placed.mainId());
+            if (placed.edge() >= 0) {
+                loc.put("x", placed.x());
+                loc.put("y", placed.y());
+                loc.put("placed_x", EmergencyReport.round(placed.snappedX(), 2));
+                loc.put("placed_y", EmergencyReport.round(placed.snappedY(), 2));
+                loc.put("moved_m", EmergencyReport.round(placed.distanceM(), 2));
+            }
+        }
         if (!r.isolable()) root.put("reason", r.reason());
         List<String> ids = new java.util.ArrayList<>();
         for (ValveOrder.Step v : order.steps()) if (!v.stationInlet()) ids.add(v.valveId());
@@ -146,7 +165,7 @@ public final class IsolateCommand implements Callable<Integer> {
 
     private String text(Network net, Isolation.Result r, ValveOrder.Result order) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Isolation of ").append(zoneText()).append(" in ").append(net.sourceName()).append("\n\n");
+        sb.append("Isolation of ").append(zoneText()).append("\nNetwork: ").append(net.sourceName()).append("\n\n");
         if (!r.isolable()) {
             sb.append("NOT ISOLABLE BY VALVES ALONE: ").append(r.reason()).append('\n');
             if (!r.stationsToStop().isEmpty()) sb.append("  stop stations: ").append(String.join(", ", r.stationsToStop())).append('\n');
@@ -163,7 +182,7 @@ public final class IsolateCommand implements Callable<Integer> {
         }
         if (order.steps().isEmpty()) sb.append("  (none)\n");
         r.alternative().ifPresent(a -> sb.append("\nAlternative with fewer valves: ").append(String.join(", ", a.valves()))
-                .append(" (adds ").append(a.addedServices().size()).append(" services)\n"));
+                .append(" (adds ").append(Plural.of(a.addedServices().size(), "service")).append(")\n"));
         sb.append(String.format(Locale.ROOT, "%nServices off %d, meters off %d, unintended segments %d%n", r.serviceIdsOff().size(), r.metersOff(),
                 r.unintended().cardinality()));
         if (!r.criticalOff().isEmpty()) sb.append("Critical customers off: ").append(String.join(", ", r.criticalOff())).append('\n');

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -163,8 +164,8 @@ public final class RiskCommand implements Callable<Integer> {
         }
         sb.append("Valves to fix first (failure enlarges an isolation most):\n");
         for (RiskTables.ValveRow r : t.valvesToFix().subList(0, Math.min(5, t.valvesToFix().size()))) {
-            sb.append(String.format(Locale.ROOT, "  %2d. %-8s %-9s operable %-7s +%d services (both sides off: %d)%n", r.rank(), r.valveId(),
-                    r.systemId(), r.operable(), r.growth(), r.servicesOffWhenFails()));
+            sb.append(String.format(Locale.ROOT, "  %2d. %-8s %-9s operable %-7s +%s (both sides off: %d)%n", r.rank(), r.valveId(),
+                    r.systemId(), r.operable(), Plural.of(r.growth(), "service"), r.servicesOffWhenFails()));
         }
         return sb.toString();
     }

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
@@ -157,8 +158,8 @@ public final class TraceCommand implements Callable<Integer> {
                 tr.fedServices().cardinality(), tr.multiFed().cardinality(), unfed.cardinality(), tr.deadMains().cardinality()));
         if (!unfed.isEmpty()) sb.append("unfed: ").append(String.join(", ", first(ids(net, unfed), 20))).append('\n');
         if (!close.isEmpty()) {
-            sb.append(String.format(Locale.ROOT, "%nwith %s closed: %d services off, %d meters off%n", String.join(", ", close),
-                    off.cardinality(), meters(net, off)));
+            sb.append(String.format(Locale.ROOT, "%nwith %s closed: %s off, %s off%n", String.join(", ", close),
+                    Plural.of(off.cardinality(), "service"), Plural.of(meters(net, off), "meter")));
             if (!off.isEmpty()) sb.append("off: ").append(String.join(", ", first(ids(net, off), 30))).append('\n');
         }
         sb.append('\n').append(Caution.TEXT).append('\n');

@@ -4,6 +4,7 @@ import java.text.ParseException;
 import java.util.Locale;
 import mil.nga.grid.features.Point;
 import mil.nga.mgrs.MGRS;
+import mil.nga.mgrs.grid.GridType;
 
 /**
  * A US National Grid reference (FGDC-STD-011-2001; the same values as MGRS over
@@ -16,6 +17,14 @@ import mil.nga.mgrs.MGRS;
  * are truncated, never rounded, so a reference names the cell that contains the point
  * (the cell's south-west corner is the reference itself). Latitudes outside -80..84
  * (the polar UPS areas) are not supported.
+ *
+ * <p>From UTM coordinates ({@link #ofUtm}) the reference is built directly: the 100 km
+ * square letters from the zone and the easting and northing, the digits the easting and
+ * northing within the square truncated to the metre (FGDC-STD-011-2001: a reference
+ * names the cell that contains the point). A network already in the point's UTM zone
+ * goes this way (see {@link GeoTransform#gridReference}): a conversion to latitude and
+ * longitude and back would give values a few nanometres below a whole metre for
+ * whole-metre coordinates, and truncation then names the cell 1 m south or west.
  */
 public record GridReference(int zone, char band, char column, char row, int easting, int northing) {
 
@@ -74,6 +83,40 @@ public record GridReference(int zone, char band, char column, char row, int east
     }
 
     /**
+     * The reference of UTM (easting, northing) in metres in zone {@code zone} with latitude
+     * band {@code band} (the northing of a southern-hemisphere zone includes its 10 000 km
+     * false northing): square letters of the zone's lettering (NGA {@code MGRS} column and
+     * row letters), digits truncated to the metre.
+     *
+     * @throws IllegalArgumentException for a non-finite coordinate or an easting outside 100 000..899 999 m
+     */
+    public static GridReference ofUtm(int zone, char band, double easting, double northing) {
+        if (!Double.isFinite(easting) || !Double.isFinite(northing) || easting < 100_000 || easting >= 900_000 || northing < 0) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "no US National Grid reference for UTM zone %d easting %.3f northing %.3f", zone, easting, northing));
+        }
+        long e = (long) Math.floor(easting);
+        long n = (long) Math.floor(northing);
+        return new GridReference(zone, band, MGRS.getColumnLetter(zone, e), MGRS.getRowLetter(zone, n),
+                (int) (e % 100_000), (int) (n % 100_000));
+    }
+
+    /** The UTM easting in metres of this reference's point (the south-west corner of its 1 m cell). */
+    public double utmEasting() {
+        return new MGRS(zone, band, column, row, easting, northing).getUTMEasting();
+    }
+
+    /** The UTM northing in metres of this reference's point (with the false northing in the south). */
+    public double utmNorthing() {
+        return new MGRS(zone, band, column, row, easting, northing).getUTMNorthing();
+    }
+
+    /** True for a southern-hemisphere latitude band (C to M). */
+    public boolean south() {
+        return band < 'N';
+    }
+
+    /**
      * Parses a reference with or without blanks ("18S UJ 234 064", "18SUJ234064"); the
      * result is the south-west corner of the cell named, to the metre.
      *
@@ -86,6 +129,23 @@ public record GridReference(int zone, char band, char column, char row, int east
             MGRS m = MGRS.parse(t);
             return new GridReference(m.getZone(), m.getBand(), m.getColumn(), m.getRow(),
                     (int) m.getEasting(), (int) m.getNorthing());
+        } catch (ParseException | RuntimeException e) {
+            throw new IllegalArgumentException("not a US National Grid reference: \"" + text + "\"", e);
+        }
+    }
+
+    /**
+     * The side in metres of the cell a typed reference names: 100 000 for a 100 km square
+     * alone ("15T WJ"), 10 000 to 1 for 1 to 5 digits per coordinate, 0 for a grid zone
+     * alone ("15T").
+     *
+     * @throws IllegalArgumentException when the text is not a USNG/MGRS reference
+     */
+    public static int cellMetres(String text) {
+        String t = text == null ? "" : text.replaceAll("\\s+", "").toUpperCase(Locale.ROOT);
+        try {
+            GridType g = MGRS.precision(t);
+            return g == GridType.GZD ? 0 : g.getPrecision();
         } catch (ParseException | RuntimeException e) {
             throw new IllegalArgumentException("not a US National Grid reference: \"" + text + "\"", e);
         }

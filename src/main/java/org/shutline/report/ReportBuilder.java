@@ -145,7 +145,8 @@ public final class ReportBuilder {
         this.geo = GeoTransform.forCrs(network.crs()).orElse(null);
         MapPainter p = new MapPainter(new MapScene(drawn(view.state())), MapSheet.printStyle());
         this.painter = geo == null ? p : p.withGrid(new UsngGrid(geo));
-        this.streets = new StreetLocator(network.context(), network.crs().unit());
+        this.streets = new StreetLocator(network.context(), network.crs().unit(),
+                network.mains().stream().map(org.shutline.model.Main::geometry).toList());
         this.title = new TitleInfo(plan != null ? plan.states().plan().project() : projectWithoutPlan(view, network),
                 view.phase(), view.subject(), options.made(), options.preparedBy(),
                 networkFile == null ? network.sourceName() : String.valueOf(networkFile.getFileName()), modified(networkFile));

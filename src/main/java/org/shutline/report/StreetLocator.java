@@ -24,7 +24,13 @@ import org.shutline.model.LinearUnit;
  * <p>Streets are the lines of the context layer named {@code streets} (any case) with a
  * non-blank attribute {@code name} (any case); lines of one name form one street. For a
  * point: the <em>street</em> is the named line nearest to it (ties: the name first in
- * alphabetical order); the <em>cross street</em> is the other named street whose
+ * alphabetical order), except for a point on a pipe (a main given to the locator within
+ * {@link #ON_PIPE_M} metres, as a valve is): then it is the nearest named line within
+ * {@link #ON_STREET_M} metres that runs along that pipe (within {@link #ALONG_DEGREES}
+ * degrees of the pipe's direction there, measured square to the street's line), so a
+ * valve near a corner is named on the street its main follows, not on the cross street
+ * whose line happens to pass a metre away; the plain nearest line when none runs along
+ * it. The <em>cross street</em> is the other named street whose
  * crossing with that street (a point where the two lines meet) is nearest to the
  * point's foot on the street. The text is
  * <ul>
@@ -48,12 +54,17 @@ public final class StreetLocator {
     public static final double ON_STREET_M = 15;
     /** Streets farther than this many metres are not used. */
     public static final double SEARCH_M = 500;
+    /** A point within this many metres of a main lies on it (valves lie on their mains). */
+    public static final double ON_PIPE_M = 0.5;
+    /** A street runs along a pipe when their directions differ by at most this many degrees. */
+    public static final double ALONG_DEGREES = 30;
     private static final String[] COMPASS = {"north", "north-east", "east", "south-east", "south", "south-west",
         "west", "north-west"};
 
     private record Piece(String name, Geometry line) {}
 
     private final STRtree tree = new STRtree();
+    private final STRtree pipes = new STRtree();
     private final Map<String, Geometry> streets = new TreeMap<>();
     private final Map<String, List<Crossing>> crossings = new HashMap<>();
     private final LinearUnit unit;
@@ -63,7 +74,14 @@ public final class StreetLocator {
 
     /** A locator over the {@code streets} layer among {@code context} (none: every description is empty). */
     public StreetLocator(List<ContextLayer> context, LinearUnit unit) {
+        this(context, unit, List.of());
+    }
+
+    /** As {@link #StreetLocator(List, LinearUnit)}, with the mains' lines: a point on one is named on the street it runs along. */
+    public StreetLocator(List<ContextLayer> context, LinearUnit unit, List<? extends Geometry> mains) {
         this.unit = unit;
+        for (Geometry g : mains) if (g != null && !g.isEmpty() && g instanceof Lineal) pipes.insert(g.getEnvelopeInternal(), g);
+        pipes.build();
         Map<String, List<Geometry>> byName = new TreeMap<>();
         for (ContextLayer layer : context) {
             if (!layer.name().equalsIgnoreCase("streets")) continue;
@@ -119,12 +137,29 @@ public final class StreetLocator {
         Envelope env = new Envelope(x - search, x + search, y - search, y + search);
         String best = null;
         double bestD = Double.POSITIVE_INFINITY;
+        double[] along = pipeDirection(p);
+        double onStreet = unit.fromMetres(ON_STREET_M);
+        double cosMax = Math.cos(Math.toRadians(ALONG_DEGREES));
         for (Object o : tree.query(env)) {
             Piece piece = (Piece) o;
             double d = piece.line().distance(p);
+            if (along != null) {
+                double[] dir = direction(piece.line(), p);
+                if (d > onStreet || dir == null || Math.abs(dir[0] * along[0] + dir[1] * along[1]) < cosMax) continue;
+            }
             if (d < bestD || (d == bestD && best != null && piece.name().compareTo(best) < 0)) {
                 bestD = d;
                 best = piece.name();
+            }
+        }
+        if (best == null && along != null) {
+            for (Object o : tree.query(env)) {
+                Piece piece = (Piece) o;
+                double d = piece.line().distance(p);
+                if (d < bestD || (d == bestD && best != null && piece.name().compareTo(best) < 0)) {
+                    bestD = d;
+                    best = piece.name();
+                }
             }
         }
         if (best == null || bestD > search) return "";
@@ -149,6 +184,44 @@ public final class StreetLocator {
         if (rounded == 0) return sb.append(" at ").append(near.other()).toString();
         return sb.append(", ").append(length(nearD)).append(' ').append(direction(near.at(), foot))
                 .append(" of ").append(near.other()).toString();
+    }
+
+    /** The unit direction of the main the point lies on (within {@link #ON_PIPE_M}), or null. */
+    private double[] pipeDirection(Point p) {
+        if (pipes.isEmpty()) return null;
+        double r = unit.fromMetres(ON_PIPE_M);
+        Envelope env = new Envelope(p.getX() - r, p.getX() + r, p.getY() - r, p.getY() + r);
+        Geometry best = null;
+        double bestD = Double.POSITIVE_INFINITY;
+        for (Object o : pipes.query(env)) {
+            Geometry g = (Geometry) o;
+            double d = g.distance(p);
+            if (d <= r && d < bestD) {
+                bestD = d;
+                best = g;
+            }
+        }
+        return best == null ? null : direction(best, p);
+    }
+
+    /** The unit direction of the segment of a line nearest the point (first of equals), or null for a line without length. */
+    static double[] direction(Geometry line, Point p) {
+        double best = Double.POSITIVE_INFINITY;
+        double[] out = null;
+        Coordinate c = p.getCoordinate();
+        for (int i = 0; i < line.getNumGeometries(); i++) {
+            Coordinate[] cs = line.getGeometryN(i).getCoordinates();
+            for (int k = 0; k + 1 < cs.length; k++) {
+                double len = cs[k].distance(cs[k + 1]);
+                if (len == 0) continue;
+                double d = org.locationtech.jts.algorithm.Distance.pointToSegment(c, cs[k], cs[k + 1]);
+                if (d < best) {
+                    best = d;
+                    out = new double[] {(cs[k + 1].x - cs[k].x) / len, (cs[k + 1].y - cs[k].y) / len};
+                }
+            }
+        }
+        return out;
     }
 
     private double toUnit(double crsDistance) {

@@ -30,8 +30,10 @@ import org.shutline.trace.ValveSegments;
  * one: its attributes and, from the network as recorded, its pressure system, valve
  * segment, the regulator stations feeding it and the valves bounding its segment.
  *
- * <p>{@link #at} returns the feature nearest the point within the tolerance, points
- * before mains when both are within it (a valve sits on its main); candidates come from
+ * <p>{@link #at} returns the feature under the point within the tolerance by the order
+ * the symbols are stacked on the map: regulator stations, then sources, valves, sensing
+ * taps, services, and mains last (a station's symbol covers the valve under it, a valve
+ * sits on its main); within one kind the nearest, exact ties to the first found. Candidates come from
  * the scene's spatial indexes, so the cost is that of the features near the point.
  * {@link #search} matches ids exactly (any case) in every layer, then addresses of
  * services containing the text.
@@ -48,11 +50,10 @@ public final class Identify {
         Point p = GF.createPoint(new Coordinate(x, y));
         Pick best = null;
         double bestD = Double.POSITIVE_INFINITY;
-        Network n = ws.network();
-        List<List<? extends Feature>> groups = List.of(sc.stationsIn(env), sc.valvesIn(env), sc.tapsIn(env), sc.sourcesIn(env),
+        List<List<? extends Feature>> groups = List.of(sc.stationsIn(env), sc.sourcesIn(env), sc.valvesIn(env), sc.tapsIn(env),
                 sc.servicesIn(env));
-        Pick.Kind[] kinds = {Pick.Kind.STATION, Pick.Kind.VALVE, Pick.Kind.TAP, Pick.Kind.SOURCE, Pick.Kind.SERVICE};
-        for (int k = 0; k < groups.size(); k++) {
+        Pick.Kind[] kinds = {Pick.Kind.STATION, Pick.Kind.SOURCE, Pick.Kind.VALVE, Pick.Kind.TAP, Pick.Kind.SERVICE};
+        for (int k = 0; k < groups.size() && best == null; k++) {
             for (Feature f : groups.get(k)) {
                 double d = f.geometry().distance(p);
                 if (d <= tol && d < bestD) {
@@ -243,7 +244,7 @@ public final class Identify {
                 meters += segs.meters(g);
                 services += segs.serviceCount(g);
             }
-            out.add("valve segment " + String.join(", ", segIds) + ": " + services + " services, " + meters + " meters");
+            out.add("valve segment " + String.join(", ", segIds) + ": " + org.shutline.model.Plural.of(services, "service") + ", " + org.shutline.model.Plural.of(meters, "meter"));
             out.add("valves bounding it: " + (valves.isEmpty() ? "none" : String.join(", ", valves)));
         }
         TreeSet<String> feeding = new TreeSet<>();

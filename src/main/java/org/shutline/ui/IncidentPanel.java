@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.model.Plural;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.time.LocalDate;
@@ -16,11 +17,11 @@ import javax.swing.SpinnerNumberModel;
 import org.locationtech.jts.geom.Geometry;
 import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
+import org.shutline.analysis.Placement;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ResponseSizing;
 import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.WorkPackages;
-import org.shutline.analysis.Zone;
 import org.shutline.model.Severity;
 import org.shutline.model.Valve;
 import org.shutline.render.GridReference;
@@ -30,23 +31,29 @@ import org.shutline.render.ValveToOperate;
 import org.shutline.trace.ValveSegments;
 
 /**
- * "Incident": with the pick button down, a click on the map isolates the main nearest
- * the point in the network as recorded ({@link IncidentResponse#leak} with
- * {@link Zone.AtPoint}, in a worker), with the command line's defaults
- * ({@link ResponseSettings#DEFAULT}: crews computed from the 4 h shut-off target, relight
- * sized for 24 h, default rates) unless a crew count is set: valves to close in field
+ * "Incident": with the pick button down, a click on the map is placed on the nearest
+ * active main by {@link Placement} (the same rule as the commands: a click farther than
+ * the refusal distance, default {@value Placement#DEFAULT_MAX_DISTANCE_M} m, from every
+ * active main is refused with the distance and the network's extent) and the valve
+ * segment placed on is isolated in the network as recorded ({@link IncidentResponse#leak},
+ * in a worker), with the command line's defaults ({@link ResponseSettings#DEFAULT}: crews
+ * computed from the 4 h shut-off target, relight sized for 24 h, default rates) unless a
+ * crew count is set: the main placed on and the distance moved, valves to close in field
  * order (crew 1's route, then crew 2's; doubtful valves first in each) with, under each
  * doubtful valve, the whole instruction if it will not close; stations to stop; services
  * and meters off, critical customers; the sizing and one shut-off work package per
  * crew ({@link WorkPackages}, by 1 km US National Grid square when the CRS has a
- * transform). The region is highlighted and the valves are numbered on the map with the
- * same numbers.
+ * transform). Every answer is re-traced ({@code InstructionCheck}) before it is shown.
+ * The region is highlighted and the valves are numbered on the map with the same numbers.
  */
 final class IncidentPanel extends JPanel {
     private final MainWindow window;
     private final JToggleButton pick = new JToggleButton("Pick incident point");
     /** 0 = crews computed from the target (the command line's default). */
     private final JSpinner crews = new JSpinner(new SpinnerNumberModel(0, 0, 200, 1));
+    private final JSpinner maxDistance = new JSpinner(new SpinnerNumberModel(Placement.DEFAULT_MAX_DISTANCE_M, 1.0, 100_000.0, 10.0));
+    private Placement placement;
+    private Workspace placementFor;
     private final JTextArea text = new JTextArea();
 
     IncidentPanel(MainWindow window) {
@@ -60,6 +67,8 @@ final class IncidentPanel extends JPanel {
         top.add(pick);
         top.add(new JLabel("crews (0 = from the 4 h target):"));
         top.add(crews);
+        top.add(new JLabel("refuse beyond (m):"));
+        top.add(maxDistance);
         add(top, BorderLayout.NORTH);
         add(new JScrollPane(text), BorderLayout.CENTER);
         text.setText("Press \"Pick incident point\", then click a main or a point on the map.");
@@ -79,25 +88,62 @@ final class IncidentPanel extends JPanel {
         return n <= 0 ? ResponseSettings.DEFAULT : ResponseSettings.DEFAULT.withCrews(n);
     }
 
-    /** Isolates at (x, y) in a worker and shows the result. */
+    /** Places (x, y) and isolates the segment placed on in a worker, and shows the result or the refusal. */
     void at(double x, double y) {
         Workspace ws = window.workspace();
         if (ws == null) return;
         ResponseSettings settings = settings();
+        double maxM = ((Number) maxDistance.getValue()).doubleValue();
         text.setText(String.format(Locale.ROOT, "Isolating at %.1f, %.1f ...", x, y));
         Isolation.Options opt = Isolation.Options.defaults(LocalDate.now());
         window.run(new Task<>("isolate", p -> {
             p.begin("isolate", 0);
-            IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), opt, new Zone.AtPoint(x, y, null), settings);
-            // never shown unless its re-trace confirms it (a mismatch fails the task with the query named)
-            org.shutline.analysis.InstructionCheck.verify(ws.segments(), r.isolation(), String.format(Locale.ROOT, "incident at %.1f, %.1f", x, y));
-            WorkPackages.Result wp = WorkPackages.build(ws.network(), r.restoration().shutOff(), sheetKey(ws),
-                    r.restoration().sizing().crews(), r.restoration().sizing().crewsComputed(), settings);
-            return new Outcome(r, wp);
-        }, o -> show(ws, o, x, y, settings), t -> text.setText("Isolation failed: " + t.getMessage())));
+            return locate(ws, x, y, maxM, opt, settings);
+        }, o -> {
+            if (o.placement() instanceof Placement.Refused f) {
+                text.setText("Refused: " + f.reason() + ".\nClick on or near a main, or raise \"refuse beyond\".");
+                window.status("Incident point refused: " + f.reason());
+            } else {
+                show(ws, o, settings);
+            }
+        }, t -> text.setText("Isolation failed: " + t.getMessage())));
     }
 
-    private record Outcome(IncidentResponse.Result response, WorkPackages.Result packages) {}
+    /**
+     * The engine work behind a click: placement, then the response for the segment placed
+     * on, re-traced before it is returned (none when refused).
+     */
+    Outcome locate(Workspace ws, double x, double y, double maxM) {
+        return locate(ws, x, y, maxM, Isolation.Options.defaults(LocalDate.now()), ResponseSettings.DEFAULT);
+    }
+
+    /** As {@link #locate(Workspace, double, double, double)} with the given options and settings. */
+    Outcome locate(Workspace ws, double x, double y, double maxM, Isolation.Options opt, ResponseSettings settings) {
+        Placement.Result pr = placementFor(ws).point(x, y, null, maxM);
+        if (!(pr instanceof Placement.Placed pl)) return new Outcome(pr, null, null);
+        IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), opt, pl.zone(), settings);
+        // never shown unless its re-trace confirms it (a mismatch fails the task with the query named)
+        org.shutline.analysis.InstructionCheck.verify(ws.segments(), r.isolation(), String.format(Locale.ROOT, "incident at %.1f, %.1f", x, y));
+        WorkPackages.Result wp = WorkPackages.build(ws.network(), r.restoration().shutOff(), sheetKey(ws),
+                r.restoration().sizing().crews(), r.restoration().sizing().crewsComputed(), settings);
+        return new Outcome(pl, r, wp);
+    }
+
+    private synchronized Placement placementFor(Workspace ws) {
+        if (placementFor != ws) {
+            placement = new Placement(ws.segments());
+            placementFor = ws;
+        }
+        return placement;
+    }
+
+    /** A click placed and answered, or refused ({@code response} and {@code packages} null). */
+    record Outcome(Placement.Result placement, IncidentResponse.Result response, WorkPackages.Result packages) {
+        /** The isolation answered; null when refused. */
+        Isolation.Result isolation() {
+            return response == null ? null : response.isolation();
+        }
+    }
 
     private static WorkPackages.SheetKey sheetKey(Workspace ws) {
         var geo = ws.geo().orElse(null);
@@ -112,10 +158,13 @@ final class IncidentPanel extends JPanel {
     }
 
     /** The text shown for an incident (also read by the tests). */
-    static String describe(IncidentResponse.Result resp, WorkPackages.Result wp, double x, double y, ResponseSettings s) {
+    static String describe(IncidentResponse.Result resp, WorkPackages.Result wp, Placement.Placed placed, ResponseSettings s) {
         Isolation.Result r = resp.isolation();
+        double x = placed.x(), y = placed.y();
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "Incident at %.1f, %.1f%n", x, y));
+        sb.append("Placed ").append(placed.describe())
+                .append(String.format(Locale.ROOT, " to %.1f, %.1f%n", placed.snappedX(), placed.snappedY()));
         if (!r.isolable()) sb.append("Valves alone cannot isolate it: ").append(r.reason()).append('\n');
         sb.append("Valves to close, in field order (crew 1's route, then crew 2's; doubtful valves first):\n");
         for (ValveOrder.Step v : resp.order().steps()) {
@@ -136,25 +185,27 @@ final class IncidentPanel extends JPanel {
         int n = wp.packages().isEmpty() ? z.crews() : wp.packages().size();
         double techs = n * (double) s.rates().techsPerCrew();
         sb.append(String.format(Locale.ROOT,
-                "Shut-off: %.1f technician-hours, %d crews needed for %.0f h; crews: %d (%s); %.1f h with them.%n"
-                        + "Relight: %.1f technician-hours, %d relight crews for %.0f h; %.1f h with %d crews.%n",
-                z.shutoffTechHours(), z.shutoffCrews(), s.targetHours(), n, z.crewsComputed() ? "computed from the target" : "as set",
-                z.shutoffTechHours() / techs, z.relightTechHours(), z.relightCrews(), s.relightTargetHours(), z.relightTechHours() / techs, n));
+                "Shut-off: %.1f technician-hours, %s needed for %.0f h; crews: %d (%s); %.1f h with them.%n"
+                        + "Relight: %.1f technician-hours, %d relight %s for %.0f h; %.1f h with %s.%n",
+                z.shutoffTechHours(), Plural.of(z.shutoffCrews(), "crew"), s.targetHours(), n, z.crewsComputed() ? "computed from the target" : "as set",
+                z.shutoffTechHours() / techs, z.relightTechHours(), z.relightCrews(), Plural.noun(z.relightCrews(), "crew"), s.relightTargetHours(), z.relightTechHours() / techs, Plural.of(n, "crew")));
         if (!wp.packages().isEmpty()) {
             sb.append(String.format(Locale.ROOT, "Work packages (one per crew, longest %.1f h):%n", wp.maxHours()));
             for (WorkPackages.Package p : wp.packages()) {
-                sb.append(String.format(Locale.ROOT, "  crew %d: %d services, %d meters, %.1f h; %s%s%n", p.crew(), p.visits().size(),
-                        p.meters(), p.hours(), String.join(", ", p.streets()),
+                sb.append(String.format(Locale.ROOT, "  crew %d: %s, %s, %.1f h; %s%s%n", p.crew(), Plural.of(p.visits().size(), "service"),
+                        Plural.of(p.meters(), "meter"), p.hours(), String.join(", ", p.streets()),
                         p.criticalCount() > 0 ? " (" + p.criticalCount() + " critical first)" : ""));
             }
         }
         return sb.toString();
     }
 
-    private void show(Workspace ws, Outcome o, double x, double y, ResponseSettings s) {
+    private void show(Workspace ws, Outcome o, ResponseSettings s) {
         IncidentResponse.Result resp = o.response();
         Isolation.Result r = resp.isolation();
-        text.setText(describe(resp, o.packages(), x, y, s));
+        Placement.Placed placed = (Placement.Placed) o.placement();
+        double x = placed.x(), y = placed.y();
+        text.setText(describe(resp, o.packages(), placed, s));
         text.setCaretPosition(0);
         List<ValveToOperate> marks = new ArrayList<>();
         for (ValveOrder.Step v : resp.order().steps()) {
@@ -174,6 +225,6 @@ final class IncidentPanel extends JPanel {
         MapOverlays ov = MapOverlays.NONE.withValvesToOperate(marks)
                 .withHazards(List.of(HazardMark.of(x, y, Severity.CRITICAL, "incident")));
         window.showPanelMarks(ov, region);
-        window.status(String.format(Locale.ROOT, "Incident: %d valves to close, %d services off", resp.order().steps().size(), r.serviceIdsOff().size()));
+        window.status("Incident: " + Plural.of(resp.order().steps().size(), "valve") + " to close, " + Plural.of(r.serviceIdsOff().size(), "service") + " off");
     }
 }

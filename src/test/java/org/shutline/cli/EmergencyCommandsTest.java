@@ -46,7 +46,7 @@ class EmergencyCommandsTest {
                 .contains("SV-C-CARE")
                 .contains("District(s) left dead: LP-SOUTH")
                 .contains("100 m in all directions (ERG Guide 115)")
-                .contains("USNG 15T WJ 12547 90596")
+                .contains("USNG 15T WJ 12547 90597")
                 .contains(Caution.TEXT);
     }
 

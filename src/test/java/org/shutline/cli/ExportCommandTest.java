@@ -306,7 +306,7 @@ class ExportCommandTest {
                 .code()).isEqualTo(2);
         CommandsTest.Run far = CommandsTest.run("export", SAMPLE.toString(), "--at", "0,0", "--out", dir.resolve("far").toString());
         assertThat(far.code()).isEqualTo(2);
-        assertThat(far.err()).contains("outside the network");
+        assertThat(far.err()).contains("from the nearest active main").contains("the network's active mains span");
         assertThat(dir.resolve("far")).doesNotExist();
         assertThat(CommandsTest.run("export", SAMPLE.toString(), "--plan", PLAN.toString(), "--step", "0", "--out",
                 dir.toString()).code()).isEqualTo(2);

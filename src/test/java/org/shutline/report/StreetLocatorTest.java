@@ -78,6 +78,40 @@ class StreetLocatorTest {
     }
 
     @Test
+    void aValveOnAMainNearACornerIsOnTheStreetItsMainFollows() {
+        // The main runs along Alder Row 3 m north of its line (y = 103); the valve on it at x = 99
+        // is 1 m from Kiln Street's line (x = 100) but 3 m from Alder Row's:
+        //
+        //          Kiln Street
+        //              |
+        //   ====main===V+======  y = 103
+        //   ---Alder Row-+-----  y = 100
+        //              |
+        var main = GF.createLineString(new Coordinate[] {new Coordinate(-50, 103), new Coordinate(150, 103)});
+        StreetLocator plain = new StreetLocator(grid(), LinearUnit.METRE);
+        assertThat(plain.describe(99, 103)).startsWith("on Kiln Street");
+        StreetLocator withMains = new StreetLocator(grid(), LinearUnit.METRE, List.of(main));
+        assertThat(withMains.describe(99, 103)).isEqualTo("on Alder Row, 1 m west of Kiln Street");
+        // a point off every main keeps the plain rule
+        assertThat(withMains.describe(99, 110)).startsWith("on Kiln Street");
+        // a main along no street (45 degrees): the plain nearest street, Kiln Street 1 m away (Alder Row 4 m)
+        var diagonal = GF.createLineString(new Coordinate[] {new Coordinate(59, 56), new Coordinate(139, 136)});
+        assertThat(new StreetLocator(grid(), LinearUnit.METRE, List.of(diagonal)).describe(99, 96)).startsWith("on Kiln Street");
+    }
+
+    @Test
+    void sampleValveCiEIsOnElderStreet() throws Exception {
+        // sample-gis/README.md: V-CI-E at 512 499, 4 890 403 on the LP-SOUTH main 3 m north of Elder Street
+        // (y 4 890 400), 1 m west of Weir Lane's line (x 512 500)
+        org.shutline.model.Network net = org.shutline.io.NetworkReader.read(java.nio.file.Path.of("sample-gis/tallowmere.gpkg"),
+                org.shutline.io.FieldMapping.DEFAULT);
+        StreetLocator s = new StreetLocator(net.context(), net.crs().unit(),
+                net.mains().stream().map(org.shutline.model.Main::geometry).toList());
+        var v = net.valves().stream().filter(x -> x.id().equals("V-CI-E")).findFirst().orElseThrow();
+        assertThat(s.describe(v.geometry().getX(), v.geometry().getY())).isEqualTo("on Elder Street, 1 m west of Weir Lane");
+    }
+
+    @Test
     void eightPointCompass() {
         Coordinate o = new Coordinate(0, 0);
         assertThat(StreetLocator.direction(o, new Coordinate(0, 5))).isEqualTo("north");

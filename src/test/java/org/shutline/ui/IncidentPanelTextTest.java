@@ -21,12 +21,12 @@ class IncidentPanelTextTest {
         Workspace ws = SampleWorkspace.get();
         ResponseSettings s = ResponseSettings.DEFAULT;
         assertThat(s.crewsGiven()).as("the window's default is the command line's: crews computed").isFalse();
-        IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), Isolation.Options.defaults(LocalDate.of(2026, 12, 1)),
-                new Zone.AtPoint(512470, 4890150, null), s);
-        WorkPackages.Result wp = WorkPackages.build(ws.network(), r.restoration().shutOff(), WorkPackages.SheetKey.NONE,
-                r.restoration().sizing().crews(), r.restoration().sizing().crewsComputed(), s);
-        String text = IncidentPanel.describe(r, wp, 512470, 4890150, s);
-        assertThat(text).containsPattern("1\\. V-015  crew 1 .*\\n +if it will not close \\(operability unknown\\): crew 1 then closes V-024, V-023, V-022, V-021, V-020")
+        // the window's own path: placement, response, packages and the re-trace, then the text
+        IncidentPanel.Outcome o = new IncidentPanel(null).locate(ws, 512470, 4890150, 100,
+                Isolation.Options.defaults(LocalDate.of(2026, 12, 1)), s);
+        WorkPackages.Result wp = o.packages();
+        String text = IncidentPanel.describe(o.response(), wp, (org.shutline.analysis.Placement.Placed) o.placement(), s);
+        assertThat(text).contains("Placed on main").containsPattern("1\\. V-015  crew 1 .*\\n +if it will not close \\(operability unknown\\): crew 1 then closes V-024, V-023, V-022, V-021, V-020")
                 .contains("5. V-026  crew 2")
                 .contains("valves alone cannot isolate: stop station ST-S1 Weir Lane Station (close V-013, V-004); adds 387 services, 497 meters")
                 .contains("crews: 2 (computed from the target)")
