@@ -165,11 +165,13 @@ final class GeoPackageSource {
         List<RawLayer.Feature> fs = new ArrayList<>();
         int nv = names.size();
         Kind[] k = kinds.toArray(new Kind[0]);
+        Interner[] intern = new Interner[nv];
+        for (int i = 0; i < nv; i++) intern[i] = new Interner(words);
         try (PreparedStatement s = c.prepareStatement(sql.toString()); ResultSet r = s.executeQuery()) {
             while (r.next()) {
                 long fid = r.getLong(1);
                 Object[] vals = new Object[nv];
-                for (int i = 0; i < nv; i++) vals[i] = value(r, i + 3, k[i], words);
+                for (int i = 0; i < nv; i++) vals[i] = value(r, i + 3, k[i], intern[i]);
                 byte[] blob = r.getBytes(2);
                 RawLayer.Feature f;
                 if (blob == null) {
@@ -185,12 +187,12 @@ final class GeoPackageSource {
         return new RawLayer(table, where, false, names, fs, crs);
     }
 
-    private static Object value(ResultSet r, int col, Kind k, Map<String, String> words) throws SQLException {
+    private static Object value(ResultSet r, int col, Kind k, Interner words) throws SQLException {
         Object v = r.getObject(col);
         if (v == null) return null;
         if (v instanceof String s) {
             if (k == Kind.DATE) return date(s);
-            return words.computeIfAbsent(s, x -> x);
+            return words.of(s);
         }
         if (v instanceof Integer || v instanceof Long) {
             long l = ((Number) v).longValue();
@@ -202,18 +204,50 @@ final class GeoPackageSource {
                 case LONG -> l;
                 case FLOAT -> (float) l;
                 case DOUBLE -> (double) l;
-                case TEXT -> words.computeIfAbsent(Long.toString(l), x -> x);
+                case TEXT -> words.of(Long.toString(l));
                 default -> v;
             };
         }
         if (v instanceof Double d) {
             return switch (k) {
                 case FLOAT -> d.floatValue();
-                case TEXT -> words.computeIfAbsent(r.getString(col), x -> x);
+                case TEXT -> words.of(r.getString(col));
                 default -> d;
             };
         }
         return v;
+    }
+
+    /**
+     * Interns the text of one column through the file's shared table while that pays:
+     * after {@value #PROBE} values, a column with more than half of them distinct (an id
+     * column) stops interning, so unique ids do not fill the table.
+     */
+    private static final class Interner {
+        private static final int PROBE = 4096;
+        private final Map<String, String> table;
+        private final Map<String, String> seen = new HashMap<>();
+        private int count;
+        private boolean on = true;
+
+        Interner(Map<String, String> table) {
+            this.table = table;
+        }
+
+        String of(String s) {
+            if (!on) return s;
+            if (count < PROBE) {
+                count++;
+                seen.putIfAbsent(s, s);
+                if (count == PROBE) {
+                    on = seen.size() <= PROBE / 2;
+                    seen.clear();
+                    if (!on) return s;
+                }
+            }
+            String t = table.putIfAbsent(s, s);
+            return t == null ? s : t;
+        }
     }
 
     /** A DATE or DATETIME cell stored as text: its calendar date (in UTC for a time with an offset); else the text. */
