@@ -5,32 +5,45 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
-import mil.nga.geopackage.GeoPackage;
-import mil.nga.geopackage.GeoPackageException;
-import mil.nga.geopackage.GeoPackageManager;
-import mil.nga.geopackage.features.user.FeatureColumn;
-import mil.nga.geopackage.features.user.FeatureDao;
-import mil.nga.geopackage.features.user.FeatureResultSet;
-import mil.nga.geopackage.features.user.FeatureRow;
-import mil.nga.geopackage.geom.GeoPackageGeometryData;
-import mil.nga.geopackage.srs.SpatialReferenceSystem;
-import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.io.ParseException;
-import org.locationtech.jts.io.WKBReader;
+import java.util.Locale;
+import java.util.Map;
 import org.shutline.model.CrsInfo;
+import org.sqlite.SQLiteConfig;
 
 /**
- * Reads every feature table of a GeoPackage, opened read-only and validated with
- * NGA's {@code GeoPackageManager.open(false, file, true)}, into {@link RawLayer}s in the order
- * the GeoPackage lists them. Geometry: the row's {@code GeoPackageGeometryData} WKB
- * read by JTS {@code WKBReader}. CRS: from the table's {@code gpkg_spatial_ref_sys}
- * row, by its organization's EPSG code when it has one, else by its WKT definition;
- * the undefined systems (srs_id -1 and 0, definition "undefined") give a null CRS.
- * A file that is not an SQLite database, or that NGA cannot open as a GeoPackage, is
- * an {@link InputException} naming the file.
+ * Reads every feature table of a GeoPackage into {@link RawLayer}s, in the order
+ * {@code gpkg_contents} lists them, with plain SQL over the SQLite driver.
+ *
+ * <p>The file is opened read-only ({@code mode=ro} URI and the driver's read-only flag):
+ * nothing is written or created beside it. Metadata comes from the GeoPackage tables
+ * ({@code gpkg_contents}, {@code gpkg_geometry_columns}, {@code gpkg_spatial_ref_sys},
+ * OGC 12-128r18 sections 1.1.2, 1.1.3, 2.1.5); a database without them is "not a readable
+ * GeoPackage". Per layer one prepared {@code SELECT pk, geom, fields...}; values by the
+ * storage class of each cell, typed by the column's declared GeoPackage type as the NGA
+ * library gave them before (TINYINT Byte, SMALLINT Short, MEDIUMINT Integer, INT and
+ * INTEGER Long, FLOAT Float, DOUBLE and REAL Double, BOOLEAN Boolean, DATE and DATETIME the
+ * calendar date in UTC, TEXT String; a cell whose storage does not fit its column, such as
+ * text in a REAL column, is returned as stored so the decoder reports it). Text values
+ * are interned per file, so a word or id repeated over a million rows is one string.
+ * Geometry: the GeoPackage binary header and WKB decoded by {@link GpkgGeometry}; a bad
+ * blob is a per-feature geometry error (a located finding), never an exception.
+ * CRS: by the organization's EPSG code when it has one, else by its WKT definition; the
+ * undefined systems (srs_id -1 and 0, definition "undefined") give a null CRS.
+ * A file that is not an SQLite database is an {@link InputException} naming the file.
+ * Time O(cells); one pass over each table.
  */
 final class GeoPackageSource {
     private static final byte[] SQLITE_MAGIC = "SQLite format 3\0".getBytes(StandardCharsets.US_ASCII);
@@ -39,22 +52,23 @@ final class GeoPackageSource {
 
     static List<RawLayer> read(Path file) throws InputException {
         checkMagic(file);
-        GeoPackage gp;
-        try {
-            // open(writable, file, validate): NGA's two-argument open(file, boolean) takes "validate", not "writable"
-            gp = GeoPackageManager.open(false, file.toFile(), true);
-        } catch (GeoPackageException e) {
-            throw new InputException(file + ": not a readable GeoPackage: " + e.getMessage(), e);
-        }
-        try {
-            List<RawLayer> out = new ArrayList<>();
-            for (String table : gp.getFeatureTables()) out.add(layer(gp, table, file));
+        try (Connection c = open(file)) {
+            List<String> tables = featureTables(c, file);
+            List<RawLayer> out = new ArrayList<>(tables.size());
+            Map<String, String> words = new HashMap<>();
+            for (String t : tables) out.add(layer(c, t, file, words));
             return out;
-        } catch (GeoPackageException e) {
+        } catch (SQLException e) {
             throw new InputException(file + ": cannot read GeoPackage: " + e.getMessage(), e);
-        } finally {
-            gp.close();
         }
+    }
+
+    /** A read-only connection: {@code file:} URI with {@code mode=ro}, and the driver's read-only open flag. */
+    static Connection open(Path file) throws SQLException {
+        SQLiteConfig config = new SQLiteConfig();
+        config.setReadOnly(true);
+        String url = "jdbc:sqlite:" + file.toAbsolutePath().toUri().toString().replaceFirst("^file:/+", "file:/") + "?mode=ro";
+        return org.sqlite.JDBC.createConnection(url, config.toProperties());
     }
 
     private static void checkMagic(Path file) throws InputException {
@@ -70,60 +84,215 @@ final class GeoPackageSource {
         }
     }
 
-    private static RawLayer layer(GeoPackage gp, String table, Path file) throws InputException {
-        String where = file + " layer " + table;
-        FeatureDao dao = gp.getFeatureDao(table);
-        List<String> names = new ArrayList<>();
-        for (FeatureColumn c : dao.getTable().getColumns()) {
-            if (!c.isPrimaryKey() && !c.isGeometry()) names.add(c.getName());
-        }
-        CrsInfo crs = crs(dao.getSrs(), where);
-        WKBReader wkb = new WKBReader();
-        List<RawLayer.Feature> fs = new ArrayList<>();
-        FeatureResultSet rs = dao.queryForAll();
-        try {
-            while (rs.moveToNext()) {
-                FeatureRow row = rs.getRow();
-                Object[] vals = new Object[names.size()];
-                for (int i = 0; i < vals.length; i++) vals[i] = plainDate(row.getValue(names.get(i)));
-                Geometry g = null;
-                String err = null;
-                GeoPackageGeometryData data = row.getGeometry();
-                if (data != null && !data.isEmpty()) {
-                    try {
-                        g = wkb.read(data.getWkb());
-                        if (g.isEmpty()) g = null;
-                    } catch (ParseException | IOException | RuntimeException e) {
-                        err = "geometry not readable: " + e.getMessage();
+    private static List<String> featureTables(Connection c, Path file) throws InputException, SQLException {
+        for (String required : List.of("gpkg_spatial_ref_sys", "gpkg_contents", "gpkg_geometry_columns")) {
+            try (PreparedStatement s = c.prepareStatement("SELECT 1 FROM sqlite_master WHERE type IN ('table', 'view') AND name = ?")) {
+                s.setString(1, required);
+                try (ResultSet r = s.executeQuery()) {
+                    if (!r.next()) {
+                        throw new InputException(file + ": not a readable GeoPackage: it has no " + required + " table");
                     }
                 }
-                fs.add(new RawLayer.Feature(row.getId(), g, err, Arrays.asList(vals)));
             }
-        } finally {
-            rs.close();
+        }
+        List<String> out = new ArrayList<>();
+        try (Statement s = c.createStatement();
+             ResultSet r = s.executeQuery("SELECT table_name FROM gpkg_contents WHERE lower(data_type) = 'features' ORDER BY rowid")) {
+            while (r.next()) out.add(r.getString(1));
+        }
+        return out;
+    }
+
+    /** Declared column type, as NGA's GeoPackageDataType named them. */
+    private enum Kind { BOOLEAN, BYTE, SHORT, INT, LONG, FLOAT, DOUBLE, TEXT, DATE, BLOB }
+
+    private static Kind kind(String declared) {
+        String t = declared == null ? "" : declared.toUpperCase(Locale.ROOT);
+        int paren = t.indexOf('(');
+        if (paren >= 0) t = t.substring(0, paren);
+        return switch (t.trim()) {
+            case "BOOLEAN" -> Kind.BOOLEAN;
+            case "TINYINT" -> Kind.BYTE;
+            case "SMALLINT" -> Kind.SHORT;
+            case "MEDIUMINT" -> Kind.INT;
+            case "INT", "INTEGER" -> Kind.LONG;
+            case "FLOAT" -> Kind.FLOAT;
+            case "DOUBLE", "REAL" -> Kind.DOUBLE;
+            case "DATE", "DATETIME" -> Kind.DATE;
+            case "BLOB" -> Kind.BLOB;
+            default -> Kind.TEXT;
+        };
+    }
+
+    private static RawLayer layer(Connection c, String table, Path file, Map<String, String> words)
+            throws InputException, SQLException {
+        String where = file + " layer " + table;
+        String geomColumn = null;
+        long srsId = Long.MIN_VALUE;
+        try (PreparedStatement s = c.prepareStatement(
+                "SELECT column_name, srs_id FROM gpkg_geometry_columns WHERE lower(table_name) = lower(?)")) {
+            s.setString(1, table);
+            try (ResultSet r = s.executeQuery()) {
+                if (r.next()) {
+                    geomColumn = r.getString(1);
+                    srsId = r.getLong(2);
+                }
+            }
+        }
+        if (geomColumn == null) {
+            throw new InputException(where + ": not a readable GeoPackage: feature table without a gpkg_geometry_columns row");
+        }
+        String pk = null;
+        List<String> names = new ArrayList<>();
+        List<Kind> kinds = new ArrayList<>();
+        try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("PRAGMA table_info(" + quote(table) + ")")) {
+            while (r.next()) {
+                String name = r.getString("name");
+                if (r.getInt("pk") > 0 && pk == null) {
+                    pk = name;
+                } else if (!name.equalsIgnoreCase(geomColumn)) {
+                    names.add(name);
+                    kinds.add(kind(r.getString("type")));
+                }
+            }
+        }
+        if (names.isEmpty() && pk == null) throw new InputException(where + ": table not found");
+        CrsInfo crs = crs(c, srsId, where);
+        StringBuilder sql = new StringBuilder("SELECT ").append(pk == null ? "rowid" : quote(pk)).append(", ").append(quote(geomColumn));
+        for (String n : names) sql.append(", ").append(quote(n));
+        sql.append(" FROM ").append(quote(table)).append(" ORDER BY 1");
+        GpkgGeometry geom = new GpkgGeometry();
+        List<RawLayer.Feature> fs = new ArrayList<>();
+        int nv = names.size();
+        Kind[] k = kinds.toArray(new Kind[0]);
+        Interner[] intern = new Interner[nv];
+        for (int i = 0; i < nv; i++) intern[i] = new Interner(words);
+        try (PreparedStatement s = c.prepareStatement(sql.toString()); ResultSet r = s.executeQuery()) {
+            while (r.next()) {
+                long fid = r.getLong(1);
+                Object[] vals = new Object[nv];
+                for (int i = 0; i < nv; i++) vals[i] = value(r, i + 3, k[i], intern[i]);
+                byte[] blob = r.getBytes(2);
+                RawLayer.Feature f;
+                if (blob == null) {
+                    f = new RawLayer.Feature(fid, null, null, Arrays.asList(vals));
+                } else {
+                    GpkgGeometry.Result g = geom.decode(blob);
+                    f = new RawLayer.Feature(fid, g.geometry(), g.error() == null ? null
+                            : "geometry (field " + geomColumn + ") not readable: " + g.error(), Arrays.asList(vals));
+                }
+                fs.add(f);
+            }
         }
         return new RawLayer(table, where, false, names, fs, crs);
     }
 
-    /** NGA gives DATE and DATETIME columns as {@code java.util.Date} parsed in UTC: back to the calendar date. */
-    private static Object plainDate(Object v) {
-        if (v instanceof java.util.Date d) return d.toInstant().atZone(java.time.ZoneOffset.UTC).toLocalDate();
+    private static Object value(ResultSet r, int col, Kind k, Interner words) throws SQLException {
+        Object v = r.getObject(col);
+        if (v == null) return null;
+        if (v instanceof String s) {
+            if (k == Kind.DATE) return date(s);
+            return words.of(s);
+        }
+        if (v instanceof Integer || v instanceof Long) {
+            long l = ((Number) v).longValue();
+            return switch (k) {
+                case BOOLEAN -> l != 0;
+                case BYTE -> (byte) l;
+                case SHORT -> (short) l;
+                case INT -> (int) l;
+                case LONG -> l;
+                case FLOAT -> (float) l;
+                case DOUBLE -> (double) l;
+                case TEXT -> words.of(Long.toString(l));
+                default -> v;
+            };
+        }
+        if (v instanceof Double d) {
+            return switch (k) {
+                case FLOAT -> d.floatValue();
+                case TEXT -> words.of(r.getString(col));
+                default -> d;
+            };
+        }
         return v;
     }
 
-    private static CrsInfo crs(SpatialReferenceSystem srs, String where) throws InputException {
-        if (srs == null) return null;
-        long id = srs.getOrganizationCoordsysId();
-        if ("EPSG".equalsIgnoreCase(srs.getOrganization()) && id > 0) {
-            try {
-                return Crs.fromEpsg((int) id);
-            } catch (InputException e) {
-                // proj4j's table lacks this code: fall back to the WKT definition below
-                if (srs.getDefinition() == null) throw e;
+    /**
+     * Interns the text of one column through the file's shared table while that pays:
+     * after {@value #PROBE} values, a column with more than half of them distinct (an id
+     * column) stops interning, so unique ids do not fill the table.
+     */
+    private static final class Interner {
+        private static final int PROBE = 4096;
+        private final Map<String, String> table;
+        private final Map<String, String> seen = new HashMap<>();
+        private int count;
+        private boolean on = true;
+
+        Interner(Map<String, String> table) {
+            this.table = table;
+        }
+
+        String of(String s) {
+            if (!on) return s;
+            if (count < PROBE) {
+                count++;
+                seen.putIfAbsent(s, s);
+                if (count == PROBE) {
+                    on = seen.size() <= PROBE / 2;
+                    seen.clear();
+                    if (!on) return s;
+                }
+            }
+            String t = table.putIfAbsent(s, s);
+            return t == null ? s : t;
+        }
+    }
+
+    /** A DATE or DATETIME cell stored as text: its calendar date (in UTC for a time with an offset); else the text. */
+    private static Object date(String s) {
+        String t = s.trim();
+        try {
+            if (t.length() > 10) return OffsetDateTime.parse(t).withOffsetSameInstant(ZoneOffset.UTC).toLocalDate();
+            return LocalDate.parse(t);
+        } catch (DateTimeParseException e) {
+            // not a GeoPackage date: LayerDecoder tries the yyyy-mm-dd prefix and reports a bad value
+            return s;
+        }
+    }
+
+    private static String quote(String name) {
+        return "\"" + name.replace("\"", "\"\"") + "\"";
+    }
+
+    private static CrsInfo crs(Connection c, long srsId, String where) throws InputException, SQLException {
+        String org = null;
+        long code = 0;
+        String def = null;
+        boolean found = false;
+        try (PreparedStatement s = c.prepareStatement(
+                "SELECT organization, organization_coordsys_id, definition FROM gpkg_spatial_ref_sys WHERE srs_id = ?")) {
+            s.setLong(1, srsId);
+            try (ResultSet r = s.executeQuery()) {
+                if (r.next()) {
+                    found = true;
+                    org = r.getString(1);
+                    code = r.getLong(2);
+                    def = r.getString(3);
+                }
             }
         }
-        String def = srs.getDefinition();
-        if (def == null || def.isBlank() || def.trim().equalsIgnoreCase("undefined") || srs.getSrsId() <= 0) return null;
+        if (!found) return null;
+        if ("EPSG".equalsIgnoreCase(org) && code > 0) {
+            try {
+                return Crs.fromEpsg((int) code);
+            } catch (InputException e) {
+                // proj4j's table lacks this code: fall back to the WKT definition below
+                if (def == null) throw e;
+            }
+        }
+        if (def == null || def.isBlank() || def.trim().equalsIgnoreCase("undefined") || srsId <= 0) return null;
         return Crs.fromWkt(def, where);
     }
 }

@@ -7,15 +7,19 @@ import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.CoordinateSequence;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
+import org.locationtech.jts.geom.Point;
 import org.shutline.model.Finding;
 import org.shutline.model.Findings;
 import org.shutline.model.Severity;
@@ -57,6 +61,8 @@ final class LayerDecoder {
     private final FieldMapping mapping;
     private final Findings findings;
     private final int[] column;
+    /** Per WORD field: each word met (and "" for the default) with its value, so each word is parsed once. */
+    private final Map<String, Map<String, Enum<?>>> words = new HashMap<>();
 
     /** One decoded feature: its geometry and typed values indexed like the schema's fields. */
     record Row(String id, Geometry geometry, List<Object> values) {
@@ -120,21 +126,20 @@ final class LayerDecoder {
     private List<Row> rows() {
         checkMixed();
         List<Row> out = new ArrayList<>(raw.features().size());
-        Set<String> ids = new HashSet<>();
+        Set<String> ids = new HashSet<>(raw.features().size() * 4 / 3 + 16);
         for (RawLayer.Feature f : raw.features()) {
             Object idRaw = column[0] < 0 ? null : f.values().get(column[0]);
             String id = text(idRaw);
-            String label = id != null ? id : "(no id)";
-            String at = "layer " + raw.name() + " feature " + label + " (" + (raw.dbf() ? "record " : "fid ") + f.fid() + ")";
+            Where at = new Where(raw, f.fid(), id);
             if (!geometryOk(f, at, id)) continue;
-            Coordinate c = f.geometry().getCoordinate();
+            Geometry c = f.geometry();
             if (id == null) {
-                findings.add(Finding.at("missing-id", Severity.ERROR, layer.name(), c.x, c.y,
+                findings.add(Finding.at("missing-id", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y,
                         at + ": field " + layer.idField().name() + " is empty; feature skipped"));
                 continue;
             }
             if (!ids.add(id)) {
-                findings.add(Finding.at("duplicate-id", Severity.ERROR, layer.name(), c.x, c.y,
+                findings.add(Finding.at("duplicate-id", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y,
                         at + ": " + layer.idField().name() + " " + id + " is used by an earlier feature; this one skipped", id));
                 continue;
             }
@@ -168,7 +173,7 @@ final class LayerDecoder {
         };
     }
 
-    private boolean geometryOk(RawLayer.Feature f, String at, String id) {
+    private boolean geometryOk(RawLayer.Feature f, Where at, String id) {
         String[] ids = id == null ? new String[0] : new String[] {id};
         if (f.geometryError() != null) {
             findings.add(Finding.of("invalid-geometry", Severity.ERROR, layer.name(), at + ": " + f.geometryError()
@@ -180,37 +185,81 @@ final class LayerDecoder {
             findings.add(Finding.of("empty-geometry", Severity.ERROR, layer.name(), at + ": no geometry; feature skipped", ids));
             return false;
         }
-        Coordinate c = g.getCoordinate();
+        Geometry c = g;
         String want = layer.shape() == Schema.Shape.LINE ? "line" : "point";
         if (!kind(g).equals(want) || g instanceof org.locationtech.jts.geom.LinearRing) {
-            findings.add(Finding.at("wrong-geometry-type", Severity.ERROR, layer.name(), c.x, c.y, at + ": geometry is a "
+            findings.add(Finding.at("wrong-geometry-type", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y, at + ": geometry is a "
                     + g.getGeometryType() + ", layer " + layer.name() + " takes "
                     + (want.equals("line") ? "LineString or MultiLineString" : "Point") + "; feature skipped", ids));
             return false;
         }
         String bad = invalid(g);
         if (bad != null) {
-            findings.add(Finding.at("invalid-geometry", Severity.ERROR, layer.name(), c.x, c.y, at + ": " + bad
+            findings.add(Finding.at("invalid-geometry", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y, at + ": " + bad
                     + "; feature skipped", ids));
             return false;
         }
         return true;
     }
 
-    /** Why a line or point geometry is unusable, or null. */
+    /** Why a line or point geometry is unusable, or null. Reads the coordinate sequences in place (no copies). */
     static String invalid(Geometry g) {
-        for (Coordinate c : g.getCoordinates()) {
-            if (!Double.isFinite(c.x) || !Double.isFinite(c.y)) return "a coordinate is not a finite number";
+        int parts = g.getNumGeometries();
+        for (int i = 0; i < parts; i++) {
+            Geometry part = g.getGeometryN(i);
+            CoordinateSequence seq = part instanceof LineString ls ? ls.getCoordinateSequence()
+                    : part instanceof Point p ? p.getCoordinateSequence() : null;
+            if (seq == null) {
+                for (Coordinate c : part.getCoordinates()) {
+                    if (!Double.isFinite(c.x) || !Double.isFinite(c.y)) return "a coordinate is not a finite number";
+                }
+                continue;
+            }
+            for (int j = 0; j < seq.size(); j++) {
+                if (!Double.isFinite(seq.getX(j)) || !Double.isFinite(seq.getY(j))) return "a coordinate is not a finite number";
+            }
         }
-        for (int i = 0; i < g.getNumGeometries(); i++) {
+        for (int i = 0; i < parts; i++) {
             if (g.getGeometryN(i) instanceof LineString ls) {
-                if (ls.getNumPoints() < 2 || ls.getLength() == 0) return "part " + (i + 1) + " has fewer than two distinct points";
+                if (ls.getNumPoints() < 2 || !distinct(ls.getCoordinateSequence())) {
+                    return "part " + (i + 1) + " has fewer than two distinct points";
+                }
             }
         }
         return null;
     }
 
-    private Object value(Schema.Field f, Object v, String at, String id, Coordinate c) {
+    /** True when some point differs from the first (the line has non-zero length). */
+    private static boolean distinct(CoordinateSequence seq) {
+        double x0 = seq.getX(0);
+        double y0 = seq.getY(0);
+        for (int j = 1; j < seq.size(); j++) if (seq.getX(j) != x0 || seq.getY(j) != y0) return true;
+        return false;
+    }
+
+    /**
+     * Where a feature is, for messages: "layer L feature ID (fid N)", built only when a
+     * finding needs it (a million rows read cleanly build no text).
+     */
+    private static final class Where {
+        private final RawLayer raw;
+        private final long fid;
+        private final String id;
+
+        Where(RawLayer raw, long fid, String id) {
+            this.raw = raw;
+            this.fid = fid;
+            this.id = id;
+        }
+
+        @Override
+        public String toString() {
+            return "layer " + raw.name() + " feature " + (id != null ? id : "(no id)") + " ("
+                    + (raw.dbf() ? "record " : "fid ") + fid + ")";
+        }
+    }
+
+    private Object value(Schema.Field f, Object v, Where at, String id, Geometry c) {
         return switch (f.type()) {
             case TEXT -> text(v);
             case REAL -> number(f, v, at, id, c, false);
@@ -235,7 +284,7 @@ final class LayerDecoder {
         return s.isEmpty() ? null : s;
     }
 
-    private Double number(Schema.Field f, Object v, String at, String id, Coordinate c, boolean integral) {
+    private Double number(Schema.Field f, Object v, Where at, String id, Geometry c, boolean integral) {
         if (v == null) return null;
         Double d = null;
         if (v instanceof Number n) {
@@ -254,7 +303,7 @@ final class LayerDecoder {
         return d;
     }
 
-    private LocalDate date(Schema.Field f, Object v, String at, String id, Coordinate c) {
+    private LocalDate date(Schema.Field f, Object v, Where at, String id, Geometry c) {
         if (v == null) return null;
         if (v instanceof LocalDate d) return d;
         if (v instanceof java.sql.Date d) return d.toLocalDate();
@@ -271,20 +320,26 @@ final class LayerDecoder {
     }
 
     @SuppressWarnings({"unchecked", "rawtypes"})
-    private Object word(Schema.Field f, Object v, String at, String id, Coordinate c) {
-        Enum<?> dflt = defaultOf(f);
+    private Object word(Schema.Field f, Object v, Where at, String id, Geometry c) {
+        Map<String, Enum<?>> known = words.computeIfAbsent(f.name(), k -> new HashMap<>());
+        Enum<?> dflt = known.computeIfAbsent("", k -> defaultOf(f));
         String w = text(v);
         if (w == null) return dflt;
+        Enum<?> hit = known.get(w);
+        if (hit != null) return hit;
         String ours = mapping.valueWord(layer.name(), f.name(), w);
         Optional<? extends Enum> e = Words.parse((Class) f.words(), ours);
-        if (e.isPresent()) return e.get();
-        findings.add(Finding.at("unknown-value", Severity.ERROR, layer.name(), c.x, c.y, at + ", field " + f.name()
+        if (e.isPresent()) {
+            known.put(w, e.get());
+            return e.get();
+        }
+        findings.add(Finding.at("unknown-value", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y, at + ", field " + f.name()
                 + ": unknown value '" + w + "'; read as " + Words.word(dflt), id));
         return dflt;
     }
 
-    private void bad(Schema.Field f, Object v, String at, String id, Coordinate c, String wanted) {
-        findings.add(Finding.at("bad-value", Severity.ERROR, layer.name(), c.x, c.y, at + ", field " + f.name()
+    private void bad(Schema.Field f, Object v, Where at, String id, Geometry c, String wanted) {
+        findings.add(Finding.at("bad-value", Severity.ERROR, layer.name(), c.getCoordinate().x, c.getCoordinate().y, at + ", field " + f.name()
                 + ": '" + v + "' is not " + wanted + "; read as empty", id));
     }
 

@@ -57,32 +57,48 @@ public final class NetworkReader {
         return build(path, layers, mapping);
     }
 
+    /**
+     * Decodes layer by layer into model records; each layer's raw features are dropped from
+     * {@code all} as soon as it is decoded, so at most one layer is held twice.
+     */
     private static Network build(Path path, List<RawLayer> all, FieldMapping mapping) throws InputException {
         Findings findings = new Findings();
-        List<RawLayer> rest = new ArrayList<>(all);
+        List<RawLayer> rest = all;
         String mainsName = mapping.layerName("mains");
-        RawLayer mains = take(rest, mainsName);
-        if (mains == null) {
+        RawLayer mainsRaw = take(rest, mainsName);
+        if (mainsRaw == null) {
             List<String> names = new ArrayList<>();
             for (RawLayer l : all) names.add(l.name());
             throw new InputException(path + ": no mains layer (looked for '" + mainsName + "'); layers found: "
                     + (names.isEmpty() ? "none" : String.join(", ", names)));
         }
         CrsResolver crs = new CrsResolver(path.toString());
-        Map<String, List<LayerDecoder.Row>> rows = new LinkedHashMap<>();
-        rows.put("mains", LayerDecoder.decode(Schema.MAINS, crs.start(mains, findings), mapping, findings));
+        List<Main> mains = mainsOf(LayerDecoder.decode(Schema.MAINS, crs.start(mainsRaw, findings), mapping, findings));
+        mainsRaw = null;
+        List<Valve> valves = List.of();
+        List<Station> stations = List.of();
+        List<SenseTap> taps = List.of();
+        List<Service> services = List.of();
+        List<Source> sources = List.of();
         for (Schema.Layer l : Schema.LAYERS) {
             if (l == Schema.MAINS) continue;
             RawLayer raw = take(rest, mapping.layerName(l.name()));
-            rows.put(l.name(), raw == null ? List.of()
-                    : LayerDecoder.decode(l, crs.adopt(raw, l.name(), findings), mapping, findings));
+            if (raw == null) continue;
+            List<LayerDecoder.Row> r = LayerDecoder.decode(l, crs.adopt(raw, l.name(), findings), mapping, findings);
+            raw = null;
+            switch (l.name()) {
+                case "valves" -> valves = valves(r);
+                case "stations" -> stations = stations(r);
+                case "sense_taps" -> taps = taps(r);
+                case "services" -> services = services(r);
+                case "sources" -> sources = sources(r);
+                default -> throw new IllegalStateException("no model records for layer " + l.name());
+            }
         }
         List<ContextLayer> context = new ArrayList<>();
         for (RawLayer l : rest) context.add(context(crs.adopt(l, l.name(), findings), findings));
         String name = path.getFileName() == null ? path.toString() : path.getFileName().toString();
-        return new Network(name, crs.target(), mainsOf(rows.get("mains")), valves(rows.get("valves")),
-                stations(rows.get("stations")), taps(rows.get("sense_taps")), services(rows.get("services")),
-                sources(rows.get("sources")), context, findings.list());
+        return new Network(name, crs.target(), mains, valves, stations, taps, services, sources, context, findings.list());
     }
 
     /** Removes and returns the layer with this name (ignoring case), or null. */

@@ -19,7 +19,9 @@ import org.shutline.model.Progress;
  * is reached (services on inactive pipe have none).
  *
  * <p>Cost: building the segments, O(nodes + edges + services), once; then per live
- * station two searches of the segment graph, O(segments + links), and the output sets
+ * station a search from its outlet, O(segments + links reached), and a search for the
+ * segments lost without it within that reach only ({@link #lostWithout}), so the whole
+ * trace costs O(network + sum of the stations' downstream reaches), plus the output sets
  * (services and pipe edges of the reached segments), instead of two searches of the
  * whole node graph per station. Meters come from the per-segment sums. Multi-fed
  * counts are kept per segment when all of a segment's pipe is of one system (always,
@@ -73,10 +75,7 @@ final class StationAttribution {
             through.and(fed);
             stServices.add(through);
             stEdges.add(edges(edgeCsr, reach, s.edgeCount()));
-            BitSet blocked = new BitSet(sg.linkCount());
-            blocked.set(sg.stationLink(st));
-            BitSet lostSegs = (BitSet) reachedAll.clone();
-            lostSegs.andNot(sg.reachFromSources(null, blocked));
+            BitSet lostSegs = lostWithout(sg, reach, reachedAll, sg.stationLink(st), queue);
             BitSet exclusive = services(vs, lostSegs, s.serviceCount());
             stExclusive.add(exclusive);
             stMeters[st] = meters(vs, reach);
@@ -140,6 +139,51 @@ final class StationAttribution {
             sys[seg] = v;
         }
         return sys;
+    }
+
+    /**
+     * Segments reached from the sources that are no longer reached when link {@code cut}
+     * (a station) is not crossed. Only segments of {@code downstream} (the reach from the
+     * station's outlet) can be lost: a flow path through the station enters its outlet
+     * segment and stays within that reach, so every reached segment outside it keeps a path
+     * without the station. The search therefore seeds the segments of {@code downstream}
+     * that hold a source or are entered by a flowing link (other than {@code cut}) from a
+     * reached segment outside it, and spreads within {@code downstream} only: O(segments
+     * and links of {@code downstream}), not of the whole network.
+     */
+    static BitSet lostWithout(SegmentGraph sg, BitSet downstream, BitSet reachedAll, int cut, int[] queue) {
+        BitSet kept = new BitSet(sg.segmentCount());
+        int tail = 0;
+        for (int seg = downstream.nextSetBit(0); seg >= 0; seg = downstream.nextSetBit(seg + 1)) {
+            if (!reachedAll.get(seg)) continue;
+            boolean seed = sg.hasSource(seg);
+            for (int i = sg.crossStart(seg); !seed && i < sg.crossEnd(seg); i++) {
+                int l = sg.crossLink(i);
+                if (l == cut) continue;
+                int w = sg.other(l, seg);
+                seed = !downstream.get(w) && reachedAll.get(w) && sg.canFlow(l, w);
+            }
+            if (seed) {
+                kept.set(seg);
+                queue[tail++] = seg;
+            }
+        }
+        int head = 0;
+        while (head < tail) {
+            int u = queue[head++];
+            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
+                int l = sg.crossLink(i);
+                if (l == cut || !sg.canFlow(l, u)) continue;
+                int w = sg.other(l, u);
+                if (!downstream.get(w) || kept.get(w)) continue;
+                kept.set(w);
+                queue[tail++] = w;
+            }
+        }
+        BitSet lost = (BitSet) downstream.clone();
+        lost.and(reachedAll);
+        lost.andNot(kept);
+        return lost;
     }
 
     /** Segments reached from one segment, gas flowing by {@link SegmentGraph#canFlow}. */

@@ -18,6 +18,17 @@ import org.shutline.model.Network;
 
 /** CRS handling checked against PROJ's cs2cs and GDAL-written .prj files. */
 class CrsTest {
+    @Test
+    void epsgTableScanGivesProj4jsOwnDefinition() throws Exception {
+        // proj4j's lookup by name (CRSFactory.createFromName) is the reference for the plain table scan
+        org.locationtech.proj4j.CRSFactory proj4j = new org.locationtech.proj4j.CRSFactory();
+        for (int code : new int[] {4326, 3857, 2056, 27700, 26918, 32619, 32733, 3035}) {
+            assertThat(Crs.fromEpsg(code).proj4()).as("EPSG:" + code)
+                    .isEqualTo(proj4j.createFromName("EPSG:" + code).getParameterString());
+        }
+        assertThatThrownBy(() -> Crs.fromEpsg(999999)).isInstanceOf(InputException.class).hasMessageContaining("EPSG:999999");
+    }
+
     @TempDir
     Path dir;
 
