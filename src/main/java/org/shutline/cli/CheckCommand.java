@@ -42,7 +42,7 @@ public final class CheckCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Topology t;
         try {
-            t = NetworkInput.load(network, mapping, Progress.NONE);
+            t = NetworkInput.read(network, mapping, Progress.NONE);
         } catch (InputException e) {
             return NetworkInput.badInput(err, e.getMessage());
         }

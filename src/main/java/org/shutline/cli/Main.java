@@ -6,7 +6,8 @@ import picocli.CommandLine.Command;
 /**
  * The {@code shutline} command: one subcommand class per command, registered here.
  * Exit codes: 0 done (for {@code check}: no error findings), 1 {@code check} found
- * errors, 2 the input could not be read or the command line is wrong, 3 an internal
+ * errors, or any other command's network gave error-level findings (one line on stderr
+ * names them, {@link DataErrors}; {@code plan} also exits 1 on a critical hazard), 2 the input could not be read or the command line is wrong, 3 an internal
  * error (the exception and where it was thrown go to stderr for a bug report), among
  * them an answer whose re-trace check failed
  * ({@link org.shutline.analysis.UnverifiedInstructionException}: the query is named and
@@ -48,6 +49,19 @@ public final class Main implements Runnable {
     /** The configured command line (used by {@link #main} and the tests). */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
+        // data problems reach every command: a run whose network gave error-level findings
+        // prints one line about them (DataErrors) and does not exit 0
+        cl.setExecutionStrategy(parsed -> {
+            DataErrors.begin(parsed.commandSpec().commandLine().getErr());
+            int code;
+            int errors;
+            try {
+                code = new CommandLine.RunLast().execute(parsed);
+            } finally {
+                errors = DataErrors.end();
+            }
+            return code == 0 && errors > 0 ? 1 : code;
+        });
         cl.setExecutionExceptionHandler((e, line, parsed) -> {
             if (e instanceof org.shutline.analysis.UnverifiedInstructionException u) {
                 // an answer that its re-trace does not confirm is never printed as an instruction

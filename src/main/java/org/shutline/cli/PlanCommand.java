@@ -164,15 +164,17 @@ public final class PlanCommand implements Callable<Integer> {
             if (s.suggestion() != null) {
                 sb.append("  suggested order: ").append(String.join(", ", s.suggestion().order())).append('\n');
                 for (Isolation.Fallback f : s.suggestion().fallbacks()) {
-                    sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): close ")
-                            .append(f.thenClose().isEmpty() ? "(nothing more)" : String.join(", ", f.thenClose()))
-                            .append(", adding ").append(f.addedServices().size()).append(" services\n");
+                    sb.append("  if ").append(f.valveId()).append(" will not close (").append(f.why()).append("): ")
+                            .append(org.shutline.report.ReportView.fallbackText(f)).append('\n');
                 }
             }
         }
         long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(Hazard::critical).count();
-        sb.append('\n').append(crit == 0 ? "Result: no critical hazard raised by the plan (exit 0)."
-                : "Result: " + crit + " critical hazard(s) raised by the plan (exit 1).").append('\n');
+        int dataErrors = DataErrors.current();
+        String data = dataErrors == 0 ? "" : "; the network read gave " + dataErrors
+                + (dataErrors == 1 ? " data error" : " data errors") + " (see the line on stderr and `shutline check`)";
+        sb.append('\n').append(crit == 0 ? "Result: no critical hazard raised by the plan" + data + " (exit " + (dataErrors == 0 ? 0 : 1) + ")."
+                : "Result: " + crit + " critical hazard(s) raised by the plan" + data + " (exit 1).").append('\n');
         sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
     }
@@ -205,6 +207,7 @@ public final class PlanCommand implements Callable<Integer> {
         root.put("project", p.project());
         root.put("network", r.states().base().network().sourceName());
         root.put("critical", r.hasCritical());
+        root.put("data_errors", DataErrors.current());
         ArrayNode rec = root.putArray("recorded_hazards");
         for (Hazard h : r.recordedHazards()) hazardJson(rec, h);
         ArrayNode steps = root.putArray("steps");

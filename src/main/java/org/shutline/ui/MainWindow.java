@@ -245,8 +245,14 @@ public final class MainWindow extends JFrame {
         feeds.show(w);
         Network n = w.network();
         setTitle("Shutline - " + n.sourceName());
-        status(String.format(Locale.ROOT, "%s: %d mains, %d valves, %d stations, %d services; CRS %s",
-                n.sourceName(), n.mains().size(), n.valves().size(), n.stations().size(), n.services().size(), n.crs().name()));
+        // data problems reach the window as they reach every command: error-level findings are
+        // counted on the status line and on the check tab, so no answer looks clean by default
+        long errors = w.findings().stream().filter(f -> f.severity().compareTo(org.shutline.model.Severity.ERROR) >= 0).count();
+        tabs.setTitleAt(tabs.indexOfComponent(findings), errors == 0 ? "Network check" : "Network check (" + org.shutline.model.Plural.of(errors, "error") + ")");
+        status(String.format(Locale.ROOT, "%s: %d mains, %d valves, %d stations, %d services; CRS %s%s",
+                n.sourceName(), n.mains().size(), n.valves().size(), n.stations().size(), n.services().size(), n.crs().name(),
+                errors == 0 ? "" : "; " + org.shutline.model.Plural.of(errors, "data error")
+                        + " (features skipped or values defaulted, results may be incomplete: see Network check)"));
     }
 
     private void failed(String what, Throwable t) {

@@ -20,6 +20,23 @@ class CommandsTest {
 
     record Run(int code, String out, String err) {}
 
+    /**
+     * The one line every command prints about the bundled sample's four deliberate data
+     * errors (SampleTown: the duplicate valve id V-017, the service SV-FAR attached to no
+     * main, the status 'actve', the valve V-OFF off its main; `shutline check` lists the
+     * same four at severity ERROR), before its result; the run then exits 1, not 0.
+     */
+    static final String SAMPLE_DATA_ERRORS = "shutline: data errors in tallowmere.gpkg: 4 error findings "
+            + "(duplicate-id 1, unattached-service 1, unknown-value 1, valve-off-main 1): features skipped or values defaulted, "
+            + "results may be incomplete";
+
+    /** A command on the bundled sample that did its work: exit 1 for the sample's data errors only, and their line. */
+    static void assertSampleRunDone(Run r) {
+        assertThat(r.err()).as("the data-error line on stderr").contains(SAMPLE_DATA_ERRORS);
+        assertThat(r.err().lines().filter(l -> !l.isBlank()).count()).as(r.err()).isEqualTo(1);
+        assertThat(r.code()).as(r.err()).isEqualTo(1);
+    }
+
     static Run run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();

@@ -38,7 +38,7 @@ class EmergencyCommandsTest {
     @Test
     void leakOnTheIntermediatePressureMainInText() {
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         assertThat(r.out()).contains("1. V-013").contains("2. V-004")
                 // the fallback printed under its valve, the extra valve joining the same crew's route
                 .containsPattern("2\\. V-004 +crew 2 .*\\n +if it will not close \\(operability unknown\\): crew 2 then closes V-005 \\(\\+\\d+ min\\)")
@@ -54,7 +54,7 @@ class EmergencyCommandsTest {
     void leakOnTheIntermediatePressureMainInJson() throws Exception {
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01",
                 "--crews", "1", "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("kind").asText()).isEqualTo("leak");
         assertThat(j.get("system").asText()).isEqualTo("IP-1");
@@ -108,7 +108,7 @@ class EmergencyCommandsTest {
     void addressesAreMatchedWithoutCaseAndAmbiguityListsTheCandidates() throws Exception {
         CommandsTest.Run one = run("incident", NET, "--address", "elder street care home, 431 ELDER STREET", "--as-of", "2026-12-01",
                 "--format", "json");
-        assertThat(one.code()).as(one.err()).isZero();
+        CommandsTest.assertSampleRunDone(one);
         JsonNode j = JSON.readTree(one.out());
         assertThat(j.get("location").get("given").asText()).contains("SV-C-CARE");
         assertThat(j.get("system").asText()).isEqualTo("LP-SOUTH");
@@ -124,7 +124,7 @@ class EmergencyCommandsTest {
         // 10 m reference: cell 12540..12550 E, 90590..90600 N: centre 12545, 90595 (FGDC-STD-011-2001 truncation)
         CommandsTest.Run r = run("incident", NET, "--usng", "15T WJ 1254 9059", "--system", "IP-1", "--as-of", "2026-12-01",
                 "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode loc = JSON.readTree(r.out()).get("location");
         assertThat(loc.get("usng").asText()).isEqualTo("15T WJ 12545 90595");
         assertThat(texts(JSON.readTree(r.out()).get("valves_to_close"), "valve")).containsExactly("V-013", "V-004");
@@ -135,7 +135,7 @@ class EmergencyCommandsTest {
     void overPressureOfADistrict() throws Exception {
         CommandsTest.Run r = run("incident", NET, "--kind", "overpressure", "--system", "LP-SOUTH", "--main", "M-CI-01",
                 "--as-of", "2026-12-01", "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("feeds")).singleElement().satisfies(f -> {
             assertThat(f.get("id").asText()).isEqualTo("ST-S1");
@@ -159,7 +159,7 @@ class EmergencyCommandsTest {
     @Test
     void riskWritesTheTablesTheLayerAndTheMap() throws Exception {
         CommandsTest.Run r = run("risk", NET, "--out", dir.toString());
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         assertThat(r.out()).contains("ST-S1").contains("Valves to fix first").contains(Caution.TEXT);
         List<String> seg = Files.readAllLines(dir.resolve("segments.csv"));
         assertThat(seg.get(0)).isEqualTo(String.join(",", RiskCommand.SEGMENT_HEADER));
@@ -187,7 +187,7 @@ class EmergencyCommandsTest {
     @Test
     void cardsPerPhaseAsTextJsonAndPdf() throws Exception {
         CommandsTest.Run r = run("cards", NET, PLAN, "--out", dir.toString(), "--as-of", "2026-12-01", "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode j = JSON.readTree(r.out());
         assertThat(j.get("cards")).hasSize(3);
         JsonNode one = j.get("cards").get(0);

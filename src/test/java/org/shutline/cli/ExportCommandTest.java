@@ -85,8 +85,8 @@ class ExportCommandTest {
 
     @Test
     void bothExportsSucceedAndNameEveryFile() {
-        assertThat(incidentRun.code()).as(incidentRun.err()).isZero();
-        assertThat(stepRun.code()).as(stepRun.err()).isZero();
+        CommandsTest.assertSampleRunDone(incidentRun);
+        CommandsTest.assertSampleRunDone(stepRun);
         for (String f : List.of("report.pdf", "results.gpkg", "valves.csv", "customers.csv", "gas_off.geojson",
                 "isolation_circle.geojson")) {
             assertThat(incident.resolve(f)).exists();

@@ -49,7 +49,7 @@ class FieldOrderCommandsTest {
     @Test
     void orderNumbersFollowTheCrewsRoutesDoubtfulFirst() throws Exception {
         CommandsTest.Run r = CommandsTest.run("incident", NET, "--at", LEAK, "--as-of", "2026-12-01", "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode j = JSON.readTree(r.out());
         JsonNode valves = j.get("valves_to_close");
         List<String> ids = new ArrayList<>();
@@ -93,7 +93,7 @@ class FieldOrderCommandsTest {
     void overPressureCrewsEqualPackagesBalancedWithinTheTarget() throws Exception {
         CommandsTest.Run r = CommandsTest.run("incident", NET, "--at", "512650,4890203", "--kind", "overpressure",
                 "--as-of", "2026-12-01", "--format", "json");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         JsonNode j = JSON.readTree(r.out());
         JsonNode resp = j.get("response");
         // 653 meters / 10 per technician-hour = 65.3 h; / 4 h = 16.3 -> 17 technicians -> 9 crews of 2 (common-practice rates)
@@ -126,7 +126,7 @@ class FieldOrderCommandsTest {
 
     @Test
     void csvCarriesTheWholeFallback() throws Exception {
-        assertThat(export.code()).as(export.err()).isZero();
+        CommandsTest.assertSampleRunDone(export);
         List<String> csv = Files.readAllLines(out.resolve("valves.csv"));
         assertThat(csv.get(1)).startsWith("1,1,V-015,").contains(V015).contains(V015_ADDS);
         assertThat(csv.get(5)).startsWith("5,2,V-026,").contains(V026);
@@ -167,7 +167,7 @@ class FieldOrderCommandsTest {
         Path cards = dir.resolve("cards");
         CommandsTest.Run r = CommandsTest.run("cards", NET, "sample-gis/tallowmere-plan.yaml", "--out", cards.toString(),
                 "--as-of", "2026-12-01");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         String fallback = "if V-004 will not close (operability unknown): close V-005; adds 0 services, 0 meters";
         assertThat(r.out()).contains(fallback);
         try (PDDocument doc = Loader.loadPDF(cards.resolve("emergency-cards.pdf").toFile())) {

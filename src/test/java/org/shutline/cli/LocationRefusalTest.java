@@ -41,7 +41,7 @@ class LocationRefusalTest {
         // 513 503 + 150 = 513 653: 150 m east of the east-most main, inside 200 m, outside 100 m
         assertThat(run("isolate", NET, "--at", "513653,4890500").err()).contains("150 m from the nearest active main");
         CommandsTest.Run ok = run("isolate", NET, "--at", "513653,4890500", "--max-distance-m", "200", "--as-of", "2026-12-01");
-        assertThat(ok.code()).as(ok.err()).isZero();
+        CommandsTest.assertSampleRunDone(ok);
         assertThat(ok.out()).contains("Placed on main").contains("moved 150 m to 513503.0, 4890500.0");
         assertThat(run("isolate", NET, "--at", "513653,4890500", "--max-distance-m", "0").code()).isEqualTo(2);
         assertThat(run("isolate", NET, "--at", "513653,4890500", "--max-distance-m", "NaN").code()).isEqualTo(2);
@@ -78,7 +78,7 @@ class LocationRefusalTest {
         assertThat(out.err()).contains("76.5 km from the nearest active main");
         // with a 2 km limit the 1 km cell is accepted, its centre 512 500, 4 890 500 placed
         CommandsTest.Run ok = run("incident", NET, "--usng", "15T WJ 12 90", "--max-distance-m", "2000", "--as-of", "2026-12-01");
-        assertThat(ok.code()).as(ok.err()).isZero();
+        CommandsTest.assertSampleRunDone(ok);
         assertThat(ok.out()).contains("centre of its 1000 m cell").contains("Placed on main");
     }
 
@@ -86,7 +86,7 @@ class LocationRefusalTest {
     void anAcceptedPointPrintsTheMainAndTheDistanceMoved() throws Exception {
         // 2 m south of the intermediate-pressure main under Gorse Avenue (y 4 890 597)
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890595", "--system", "IP-1", "--as-of", "2026-12-01");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         assertThat(r.out()).contains("Placed on main M-IP-007 (IP-1), moved 2.0 m to 512547.0, 4890597.0");
         CommandsTest.Run j = run("incident", NET, "--at", "512547,4890595", "--system", "IP-1", "--as-of", "2026-12-01",
                 "--format", "json");
@@ -113,7 +113,7 @@ class LocationRefusalTest {
         // M-CI-01 (Elder Street, LP-SOUTH): 7 services, 10 meters; 10 meters / 10 per technician-hour = 1.0
         // technician-hour, one technician in one crew (common-practice rates, ResponseRates.DEFAULT)
         CommandsTest.Run r = run("incident", NET, "--main", "M-CI-01", "--crews", "1", "--as-of", "2026-12-01");
-        assertThat(r.code()).as(r.err()).isZero();
+        CommandsTest.assertSampleRunDone(r);
         assertThat(r.out()).contains("with 1 crew,").contains("1 technician needed to finish in 4.0 h (1 crew of 2)").contains("1 technician (1 relight crew, sized separately)")
                 .contains("h with 1 crew\n").doesNotContainPattern("\\b1 (services|meters|valves)\\b").doesNotContain("1 crews").doesNotContain("1 technicians")
                 .doesNotContain("crew(s)");
