@@ -186,7 +186,7 @@ public final class CardsCommand implements Callable<Integer> {
                         + (iso.stationInletValves().isEmpty() ? "none recorded" : String.join(", ", iso.stationInletValves())) + ")"));
             }
             iso.alternative().ifPresent(a -> rows.add(List.of("  fewer valves", String.join(", ", a.valves()) + " (adds "
-                    + a.addedServices().size() + " services)")));
+                    + Plural.of(a.addedServices().size(), "service") + ")")));
             ValveRoute.Result r = site.route();
             if (!r.crews().isEmpty()) rows.add(List.of("  valve time", String.format(Locale.ROOT, "%.0f min with %d crew(s)", r.elapsedMinutes(), r.crews().size())));
             rows.add(List.of("  customers off", Plural.of(iso.serviceIdsOff().size(), "service") + ", " + Plural.of(iso.metersOff(), "meter")));
@@ -210,10 +210,10 @@ public final class CardsCommand implements Callable<Integer> {
                     rows.add(List.of("    if " + x.valveId() + " will not close", "(" + x.why() + ") " + org.shutline.report.ReportView.fallbackText(x)));
                 }
             }
-            rows.add(List.of("  at risk", op.atRisk().cardinality() + " services, " + op.atRiskMeters() + " meters; check each before relight"));
+            rows.add(List.of("  at risk", Plural.of(op.atRisk().cardinality(), "service") + ", " + Plural.of(op.atRiskMeters(), "meter") + "; check each before relight"));
             if (!op.criticalAtRisk().isEmpty()) rows.add(List.of("  critical at risk", String.join(", ", op.criticalAtRisk())));
-            rows.add(List.of("  off after shut-off", op.off().cardinality() + " services; relight " + op.restoration().metersRelight()
-                    + String.format(Locale.ROOT, " meters (%.0f technician-hours)", op.restoration().sizing().relightTechHours())));
+            rows.add(List.of("  off after shut-off", Plural.of(op.off().cardinality(), "service") + "; relight " + Plural.of(op.restoration().metersRelight(), "meter")
+                    + String.format(Locale.ROOT, " (%.0f technician-hours)", op.restoration().sizing().relightTechHours())));
         }
         return rows;
     }

@@ -120,6 +120,22 @@ public final class PlanCommand implements Callable<Integer> {
         return PlanEvaluation.evaluate(ps, HazardChecks.discover(), settings, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M, progress);
     }
 
+    /** {@code text} split at blanks into lines of at most {@code width} characters (a longer word on a line of its own). */
+    static List<String> wrap(String text, int width) {
+        List<String> out = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String w : text.split(" ")) {
+            if (line.length() > 0 && line.length() + 1 + w.length() > width) {
+                out.add(line.toString());
+                line.setLength(0);
+            }
+            if (line.length() > 0) line.append(' ');
+            line.append(w);
+        }
+        out.add(line.toString());
+        return out;
+    }
+
     static String hazardCodes(List<Hazard> hs) {
         List<String> s = new ArrayList<>();
         for (Hazard h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + (h.mitigated() ? ", mitigated" : "") + ")");
@@ -138,11 +154,12 @@ public final class PlanCommand implements Callable<Integer> {
         }
         sb.append(String.format(Locale.ROOT, "%4s %-5s %-58s %8s %7s %8s  %s%n", "step", "phase", "action", "svc off", "mtr off", "crit off", "hazards (new at this step)"));
         for (PlanEvaluation.StepResult s : r.steps()) {
-            String action = s.step().describe();
-            if (action.length() > 58) action = action.substring(0, 55) + "...";
-            sb.append(String.format(Locale.ROOT, "%4d %-5d %-58s %8d %7d %8d  %s%s%n", s.step().number(), s.step().phase() + 1, action,
+            // a long action wraps at blanks onto continuation lines under its column, never cut
+            List<String> action = wrap(s.step().describe(), 58);
+            sb.append(String.format(Locale.ROOT, "%4d %-5d %-58s %8d %7d %8d  %s%s%n", s.step().number(), s.step().phase() + 1, action.get(0),
                     s.servicesOff(), s.metersOff(), s.criticalOff().size(), hazardCodes(s.hazards()),
                     s.continuing().isEmpty() ? "" : (s.hazards().isEmpty() ? "" : "; ") + "(" + s.continuing().size() + " continuing)"));
+            for (String more : action.subList(1, action.size())) sb.append(String.format(Locale.ROOT, "%11s%s%n", "", more));
         }
         sb.append("\nPhases:\n");
         for (PlanEvaluation.PhaseResult ph : r.phases()) {

@@ -152,8 +152,9 @@ public final class RiskCommand implements Callable<Integer> {
                 .append(t.stations().size()).append(" stations, ").append(t.valvesToFix().size()).append(" relied-on valves\n\n");
         sb.append("Largest segment isolations:\n");
         for (RiskTables.SegmentRow r : t.segments().subList(0, Math.min(5, t.segments().size()))) {
-            String mains = String.join(" ", r.mains());
-            if (mains.length() > 40) mains = mains.substring(0, 37) + "...";
+            // the first mains by name and the count of the rest (all of them are in risk-segments.csv)
+            String mains = r.mains().size() <= 4 ? String.join(" ", r.mains())
+                    : String.join(" ", r.mains().subList(0, 4)) + " and " + (r.mains().size() - 4) + " more mains";
             sb.append(String.format(Locale.ROOT, "  segment %-5d %-9s %5d services %5d meters %2d valves%s  %s%n", r.segment(), r.systemId(),
                     r.servicesOff(), r.metersOff(), r.valves(), r.isolable() ? "" : " (not by valves alone)", mains));
         }

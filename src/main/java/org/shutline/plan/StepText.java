@@ -1,5 +1,6 @@
 package org.shutline.plan;
 
+import org.shutline.model.Plural;
 import java.util.Locale;
 
 /** Plain descriptions of step actions for tables and maps. */
@@ -19,7 +20,7 @@ final class StepText {
         }
         if (a instanceof StepAction.RemoveBypass b) return "remove bypass " + b.id();
         if (a instanceof StepAction.TransferServices t) {
-            return "transfer " + (t.services().isEmpty() ? "all services" : t.services().size() + " services")
+            return "transfer " + (t.services().isEmpty() ? "all services" : Plural.of(t.services().size(), "service"))
                     + " from " + t.from() + " to " + t.to();
         }
         if (a instanceof StepAction.MoveTap m) {

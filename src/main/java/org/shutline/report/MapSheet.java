@@ -349,7 +349,7 @@ public final class MapSheet implements Sheet {
         if (notes.isEmpty() && room > 0) g.drawString("(none)", x, (float) (y + fm.getAscent()));
         for (int i = 0; i < notes.size() && room > 0; i++) {
             List<String> ls = TableSheets.Footer.wrap(notes.get(i), fm, r.getWidth() - 12);
-            if (ls.size() > 2) ls = List.of(ls.get(0), TableSheets.fit(String.join(" ", ls.subList(1, ls.size())), fm, r.getWidth() - 12));
+            // a note is drawn whole, wrapped, or not at all (then counted in the line below): never cut mid-sentence
             boolean last = i == notes.size() - 1;
             if (room < ls.size() + (last ? 0 : 1)) {
                 g.drawString("... and " + (notes.size() - i) + " more (see the lists)", x, (float) (y + fm.getAscent()));

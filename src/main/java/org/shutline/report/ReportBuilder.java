@@ -1,5 +1,6 @@
 package org.shutline.report;
 
+import org.shutline.model.Plural;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -354,8 +355,8 @@ public final class ReportBuilder {
         out.addAll(TableSheets.layout("Valve operation list", sub, FieldLists.VALVE_HEADER, vr, f));
         List<List<String>> cr = customerRows();
         if (cr.isEmpty()) cr = List.of(List.of("", "(no customers off gas in this view)"));
-        out.addAll(TableSheets.layout("Customers off gas (" + view.servicesOff().cardinality() + " services, "
-                + view.metersOff() + " meters)", sub, FieldLists.CUSTOMER_HEADER, cr, f));
+        out.addAll(TableSheets.layout("Customers off gas (" + Plural.of(view.servicesOff().cardinality(), "service") + ", "
+                + Plural.of(view.metersOff(), "meter") + ")", sub, FieldLists.CUSTOMER_HEADER, cr, f));
         if (!view.hazards().isEmpty()) out.addAll(TableSheets.layout("Hazards and actions", sub,
                 List.of("code", "severity", "features", "what is wrong", "action"), hazardRows(), f));
         if (plan != null) {

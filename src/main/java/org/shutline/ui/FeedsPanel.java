@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.model.Plural;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
@@ -57,7 +58,7 @@ final class FeedsPanel extends JPanel {
         services = t.stationServices();
         exclusive = t.stationExclusive();
         meters = t.stationMeters();
-        multi.setText(" Customers fed by more than one station: " + t.multiFed().cardinality() + " services");
+        multi.setText(" Customers fed by more than one station: " + Plural.of(t.multiFed().cardinality(), "service"));
         model.fireTableDataChanged();
     }
 
@@ -93,7 +94,7 @@ final class FeedsPanel extends JPanel {
             if (p != null) g.add(p);
         }
         window.showPanelMarks(org.shutline.render.MapOverlays.NONE, g);
-        window.status(m.cardinality() + " services fed by more than one station highlighted");
+        window.status(Plural.of(m.cardinality(), "service") + " fed by more than one station highlighted");
     }
 
     private final class Model extends AbstractTableModel {

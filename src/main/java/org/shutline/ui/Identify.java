@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.model.Plural;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
@@ -220,9 +221,8 @@ public final class Identify {
             case STATION -> {
                 int e = idx < 0 ? -1 : s.stationEdge(idx);
                 if (e >= 0) {
-                    out.add(String.format(Locale.ROOT, "feeds %d services (%d meters), %d of them alone",
-                            tr.stationServices().get(idx).cardinality(), tr.stationMeters()[idx],
-                            tr.stationExclusive().get(idx).cardinality()));
+                    out.add("feeds " + Plural.of(tr.stationServices().get(idx).cardinality(), "service") + " ("
+                            + Plural.of(tr.stationMeters()[idx], "meter") + "), " + tr.stationExclusive().get(idx).cardinality() + " of them alone");
                     out.add(s.stationInService(idx) ? "in service" : "out of service");
                 } else {
                     out.add("not attached to its inlet and outlet mains");

@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.model.Plural;
 import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.Dimension;
@@ -266,8 +267,8 @@ final class PlanPanel extends JPanel {
             return;
         }
         PlanEvaluation.StepResult s = r.steps().get(i);
-        summary.setText(String.format(Locale.ROOT, " Step %d: %d services off, %d meters off, %d critical customers off",
-                s.step().number(), s.servicesOff(), s.metersOff(), s.criticalOff().size()));
+        summary.setText(" Step " + s.step().number() + ": " + Plural.of(s.servicesOff(), "service") + " off, " + Plural.of(s.metersOff(), "meter")
+                + " off, " + Plural.of(s.criticalOff().size(), "critical customer") + " off");
         for (Hazard h : s.hazards()) hazardRows.addElement(Words.word(h.severity()).toUpperCase(Locale.ROOT) + " " + h.code() + ": " + h.message());
         for (Hazard h : s.continuing()) hazardRows.addElement("(continuing) " + Words.word(h.severity()) + " " + h.code());
         StringBuilder d = new StringBuilder(s.step().describe()).append('\n');

@@ -126,7 +126,7 @@ class StationWorkRulesTest {
         assertThat(at(r, 2, "service-transfer")).singleElement().satisfies(h -> {
             assertThat(h.severity()).isEqualTo(Severity.WARNING);
             assertThat(h.features()).containsExactly("LP-C", "LP-B", "S-3");
-            assertThat(h.message()).contains("1 services (3 meters)").contains("3 meters need a relight");
+            assertThat(h.message()).contains("1 service (3 meters)").contains("is interrupted").contains("3 meters need a relight");
         });
     }
 

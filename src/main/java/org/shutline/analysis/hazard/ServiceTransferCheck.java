@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Plural;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.model.Service;
@@ -47,9 +48,9 @@ public final class ServiceTransferCheck implements HazardCheck {
         }
         if (interrupted == 0) return out;
         out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), ids, x, y,
-                "At " + ctx.stepLabel() + ", " + interrupted + " services (" + meters + " meters) moved from " + t.from() + " to " + t.to()
-                        + " are interrupted; " + relights + " meters need a relight at this step"
-                        + (stayOff == 0 ? "." : "; " + stayOff + " services stay off gas after it (" + t.to() + " not live)."),
+                "At " + ctx.stepLabel() + ", " + Plural.of(interrupted, "service") + " (" + Plural.of(meters, "meter") + ") moved from " + t.from() + " to " + t.to()
+                        + (interrupted == 1 ? " is" : " are") + " interrupted; " + Plural.of(relights, "meter") + (relights == 1 ? " needs" : " need") + " a relight at this step"
+                        + (stayOff == 0 ? "." : "; " + Plural.of(stayOff, "service") + (stayOff == 1 ? " stays" : " stay") + " off gas after it (" + t.to() + " not live)."),
                 "Notify the customers, shut off each meter before its service is cut, and purge, relight and leak-check each one "
                         + "when it is on the new main (common practice); critical customers first."));
         return out;

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Plural;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.analysis.OverpressureLimit;
@@ -64,7 +65,7 @@ public final class TapOnDeadMainCheck implements HazardCheck {
                 + " (" + tap.device().name().toLowerCase() + ") " + why + ". The station will sense no outlet pressure, open to full inlet pressure "
                 + Pressures.describe(ctx.network(), station.inSys(), ctx.settings().pressureUnit())
                 + " and over-pressure its outlet system " + Pressures.describe(ctx.network(), station.outSys(), ctx.settings().pressureUnit())
-                + ": " + atRisk + " services downstream at risk. "
+                + ": " + Plural.of(atRisk, "service") + " downstream at risk. "
                 + OverpressureLimit.judge(ctx.network(), station, ctx.settings().pressureUnit(), ctx.settings().lowPressureLimit());
         String action = "Move sensing tap " + tap.id() + " to a live main of " + station.outSys() + " connected to the station outlet before "
                 + ctx.stepLabel() + "; otherwise staff station " + station.id()
