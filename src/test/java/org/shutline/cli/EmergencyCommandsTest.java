@@ -50,6 +50,47 @@ class EmergencyCommandsTest {
                 .contains(Caution.TEXT);
     }
 
+    /** Count and meter sum of LP-SOUTH's services as GDAL's SQL reads them from the sample; null without ogrinfo. */
+    private static long[] southByGdal() throws Exception {
+        Process p;
+        try {
+            p = new ProcessBuilder("ogrinfo", "-q", NET, "-sql",
+                    "SELECT count(*) AS n, sum(meters) AS m FROM services WHERE system_id = 'LP-SOUTH'")
+                    .redirectErrorStream(true).start();
+        } catch (java.io.IOException e) {
+            return null;
+        }
+        String out = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        p.waitFor();
+        java.util.regex.Matcher n = java.util.regex.Pattern.compile("\\bn \\(Integer\\) = (\\d+)").matcher(out);
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\bm \\(Integer\\) = (\\d+)").matcher(out);
+        assertThat(n.find() && m.find()).as(out).isTrue();
+        return new long[] {Long.parseLong(n.group(1)), Long.parseLong(m.group(1))};
+    }
+
+    @Test
+    void theIntermediatePressureLeakFiguresAgreeWithGdalAndTheirReTrace() throws Exception {
+        // outside the program: GDAL's SQL over the sample's services layer (every LP-SOUTH service and its
+        // meters); the leak on M-IP-007 stops ST-S1, LP-SOUTH's only station, so the whole district goes off
+        long[] south = southByGdal();
+        org.junit.jupiter.api.Assumptions.assumeTrue(south != null, "ogrinfo (gdal-bin) not installed");
+        CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01",
+                "--format", "json");
+        CommandsTest.assertSampleRunDone(r);
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(j.get("services_off").asLong()).isEqualTo(south[0]);
+        assertThat(j.get("meters_off").asLong()).isEqualTo(south[1]);
+        // re-trace with the trace command: the valves printed, closed, leave ST-S1 feeding nothing and put off the same
+        List<String> valves = texts(j.get("valves_to_close"), "valve");
+        CommandsTest.Run t = run("trace", NET, "--close", String.join(",", valves), "--format", "json");
+        JsonNode tj = JSON.readTree(t.out());
+        for (JsonNode st : tj.get("stations")) {
+            if (st.get("station_id").asText().equals("ST-S1")) assertThat(st.get("services_fed").asInt()).isZero();
+        }
+        assertThat(tj.get("services_off").asLong()).isEqualTo(south[0]);
+        assertThat(tj.get("meters_off").asLong()).isEqualTo(south[1]);
+    }
+
     @Test
     void leakOnTheIntermediatePressureMainInJson() throws Exception {
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01",
