@@ -36,14 +36,7 @@ final class GridSheets {
 
     /** The sheet key: the 1 km square of the point, or "all" without a transform. */
     WorkPackages.SheetKey sheetKey() {
-        if (geo == null) return WorkPackages.SheetKey.NONE;
-        return (x, y) -> {
-            try {
-                return geo.gridReference(x, y).format(GridReference.Precision.KM1);
-            } catch (IllegalArgumentException e) {
-                return "(outside the grid)";
-            }
-        };
+        return org.shutline.render.GridSheetKey.of(geo);
     }
 
     /** The 1 m reference of a network point, or "" without a transform. */

@@ -146,15 +146,7 @@ final class IncidentPanel extends JPanel {
     }
 
     private static WorkPackages.SheetKey sheetKey(Workspace ws) {
-        var geo = ws.geo().orElse(null);
-        if (geo == null) return WorkPackages.SheetKey.NONE;
-        return (x, y) -> {
-            try {
-                return geo.gridReference(x, y).format(GridReference.Precision.KM1);
-            } catch (IllegalArgumentException e) {
-                return "(outside the grid)";
-            }
-        };
+        return org.shutline.render.GridSheetKey.of(ws.geo().orElse(null));
     }
 
     /** The text shown for an incident (also read by the tests). */
