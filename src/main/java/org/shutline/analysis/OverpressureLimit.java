@@ -54,7 +54,7 @@ public final class OverpressureLimit {
     /** The 192.201(a)(1) limit of a low-pressure distribution system. */
     public static Limit lowPressure(Pressure setting) {
         return new Limit(setting, "49 CFR 192.201(a)(1)", "low-pressure distribution system: no pressure that makes connected, "
-                + "properly adjusted appliances unsafe, taken as " + format(setting) + " (common practice setting)");
+                + "properly adjusted appliances unsafe, taken as " + format(setting) + (Math.abs(setting.pascals() - DEFAULT_LOW_PRESSURE_LIMIT.pascals()) < 1e-6 ? " (common practice default; the operator sets its own)" : " (as set for this run)"));
     }
 
     /** The limit of system {@code sys}, or null when its MAOP and pressure class are not recorded. */

@@ -20,7 +20,9 @@ import org.shutline.analysis.hazard.StepContext;
 import org.shutline.io.AtomicFiles;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
+import org.shutline.model.Pressure;
 import org.shutline.model.PressureUnit;
+import org.shutline.analysis.OverpressureLimit;
 import org.shutline.model.Progress;
 import org.shutline.model.ServiceClass;
 import org.shutline.model.Severity;
@@ -73,6 +75,14 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
     private LocalDate asOf;
 
+    @Option(names = "--low-pressure-limit", paramLabel = "P", defaultValue = "0.5psi",
+        description = "limit for a low-pressure district under 49 CFR 192.201(a)(1), a value and unit: 0.5psi, 14in_wc, 3.45kPa, 34.5mbar (default: ${DEFAULT-VALUE}, common practice; set your own)")
+    private String lowPressureLimit;
+
+    @Option(names = "--sensing-line-m", paramLabel = "M", defaultValue = "10",
+        description = "a cut or tie-in this close to a sensing tap or its control line warns, in metres (default: ${DEFAULT-VALUE}, common practice)")
+    private double sensingLineM;
+
     @Option(names = "--inspection-months", defaultValue = "15", description = "valve inspection interval in months (default: ${DEFAULT-VALUE}, 49 CFR 192.747)")
     private int inspectionMonths;
 
@@ -80,9 +90,17 @@ public final class PlanCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        Pressure limit = parsePressure(lowPressureLimit);
+        if (limit == null || limit.pascals() <= 0) {
+            return NetworkInput.badInput(err, "plan: --low-pressure-limit takes a positive value and a unit (0.5psi, 14in_wc, 3.45kPa, 34.5mbar), not '"
+                    + lowPressureLimit + "'");
+        }
+        if (!(sensingLineM >= 0) || Double.isInfinite(sensingLineM)) {
+            return NetworkInput.badInput(err, "plan: --sensing-line-m takes a distance of 0 m or more, not " + sensingLineM);
+        }
         PlanEvaluation.Result r;
         try {
-            r = evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, Progress.NONE);
+            r = evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, limit, sensingLineM, Progress.NONE);
         } catch (InputException | PlanException e) {
             return NetworkInput.badInput(err, e.getMessage());
         }
@@ -108,6 +126,14 @@ public final class PlanCommand implements Callable<Integer> {
     /** Read, apply and evaluate; shared with the window and the export commands. */
     public static PlanEvaluation.Result evaluate(Path network, Path mapping, Path planFile, String unit, LocalDate asOf,
                                                  int inspectionMonths, Progress progress) throws InputException, PlanException {
+        return evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, OverpressureLimit.DEFAULT_LOW_PRESSURE_LIMIT,
+                StepContext.DEFAULT_SENSING_LINE_M, progress);
+    }
+
+    /** As above, with the low-pressure limit of 49 CFR 192.201(a)(1) and the sensing-line distance set. */
+    public static PlanEvaluation.Result evaluate(Path network, Path mapping, Path planFile, String unit, LocalDate asOf,
+                                                 int inspectionMonths, Pressure lowPressureLimit, double sensingLineM,
+                                                 Progress progress) throws InputException, PlanException {
         Topology t = NetworkInput.load(network, mapping, progress);
         Plan plan = PlanReader.read(planFile);
         PressureUnit pu = plan.pressureUnit();
@@ -115,8 +141,9 @@ public final class PlanCommand implements Callable<Integer> {
             pu = PressureUnit.parse(unit).orElseThrow(() -> new PlanException("unknown pressure unit '" + unit + "'", 0));
         }
         PlanStates ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
-        StepContext.Settings settings = new StepContext.Settings(asOf == null ? LocalDate.now() : asOf,
-                Period.ofMonths(inspectionMonths), pu);
+        StepContext.Settings settings = new StepContext.Settings(
+                new org.shutline.analysis.ValveDoubt.Settings(asOf == null ? LocalDate.now() : asOf, Period.ofMonths(inspectionMonths)),
+                pu, lowPressureLimit, sensingLineM);
         return PlanEvaluation.evaluate(ps, HazardChecks.discover(), settings, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M, progress);
     }
 
@@ -134,6 +161,14 @@ public final class PlanCommand implements Callable<Integer> {
         }
         out.add(line.toString());
         return out;
+    }
+
+    /** A pressure written as a number and a unit ("0.5psi", "14 in_wc", "3.45kPa"); null when it is not one. */
+    static Pressure parsePressure(String text) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*([0-9]+(?:\\.[0-9]+)?)\\s*([A-Za-z_ .]+?)\\s*").matcher(text == null ? "" : text);
+        if (!m.matches()) return null;
+        double v = Double.parseDouble(m.group(1));
+        return PressureUnit.parse(m.group(2)).map(u -> Pressure.of(v, u)).orElse(null);
     }
 
     static String hazardCodes(List<Hazard> hs) {

@@ -62,8 +62,7 @@ public final class TapOnDeadMainCheck implements HazardCheck {
     private Hazard hazard(StepContext ctx, Station station, SenseTap tap, int st, String why, FeedTrace.Result tr) {
         int atRisk = tr.servicesFedThrough(st).cardinality();
         String msg = "At " + ctx.stepLabel() + ", station " + station.id() + label(station) + " sensing tap " + tap.id()
-                + " (" + tap.device().name().toLowerCase() + ") " + why + ". The station will sense no outlet pressure, open to full inlet pressure "
-                + Pressures.describe(ctx.network(), station.inSys(), ctx.settings().pressureUnit())
+                + " (" + tap.device().name().toLowerCase() + ") " + why + ". The station will sense no outlet pressure, open wide"
                 + " and over-pressure its outlet system " + Pressures.describe(ctx.network(), station.outSys(), ctx.settings().pressureUnit())
                 + ": " + Plural.of(atRisk, "service") + " downstream at risk. "
                 + OverpressureLimit.judge(ctx.network(), station, ctx.settings().pressureUnit(), ctx.settings().lowPressureLimit());
