@@ -153,6 +153,7 @@ public final class MainWindow extends JFrame {
     Workspace workspace() { return ws; }
     Pick selected() { return selected; }
     PlanPanel planPanel() { return plan; }
+    IncidentPanel incidentPanel() { return incident; }
     JTabbedPane tabs() { return tabs; }
     String cautionText() { return caution.getText(); }
 

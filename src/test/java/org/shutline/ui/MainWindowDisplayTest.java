@@ -110,7 +110,7 @@ class MainWindowDisplayTest {
             }
         }
         assertThat(attached).isPositive();
-        assertThat(summary).contains("Step 3: " + attached + " services off, " + meters + " meters off, 1 critical customers off");
+        assertThat(summary).contains("Step 3: " + attached + " services off, " + meters + " meters off, 1 critical customer off");
         List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
         assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL tap-on-dead-main") && h.contains("T-S1-W"));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
@@ -372,6 +372,54 @@ class MainWindowDisplayTest {
             Thread.sleep(300);
             screenshotIfAsked();
         }
+    }
+
+    @Test
+    @Order(0)
+    void anIncidentPickIsPlacedAnsweredAndRefusedFarAway() throws Exception {
+        // the data errors of the network read are counted on the check tab (the same rule as every command)
+        long errors = win.workspace().findings().stream().filter(f -> f.severity().compareTo(org.shutline.model.Severity.ERROR) >= 0).count();
+        String title = onEdt(() -> win.tabs().getTitleAt(0));
+        assertThat(title).isEqualTo(errors == 0 ? "Network check" : "Network check (" + org.shutline.model.Plural.of(errors, "error") + ")");
+        javax.swing.JTextArea text = (javax.swing.JTextArea) onEdt(() -> find(win, "incidentText"));
+        onEdt(() -> {
+            win.tabs().setSelectedComponent(win.incidentPanel());
+            win.incidentPanel().at(512470, 4890150);
+            return null;
+        });
+        waitFor("incident answered", () -> text.getText().contains("Services off"));
+        String t = onEdt(() -> text.getText());
+        // the same answer as `shutline incident --at 512470,4890150` (FieldOrderCommandsTest): placed, field order, fallback
+        assertThat(t).contains("Placed on main").contains("1. V-015  crew 1").contains("if it will not close")
+                .contains("Work packages (one per crew");
+        waitFor("map drawn", () -> win.map().isSettled());
+        if (System.getProperty("shutline.incidentScreenshot") != null) {
+            onEdt(() -> {
+                win.map().zoomTo(new org.locationtech.jts.geom.Envelope(512470 - 300, 512470 + 300, 4890150 - 220, 4890150 + 220), 400);
+                return null;
+            });
+            waitFor("map drawn", () -> win.map().isSettled());
+            Thread.sleep(300);
+            screenshotTo(System.getProperty("shutline.incidentScreenshot"));
+        }
+        // 500 m east of the east-most main: refused with the distance, nothing isolated
+        onEdt(() -> {
+            win.incidentPanel().at(514003, 4890500);
+            return null;
+        });
+        waitFor("far click refused", () -> text.getText().startsWith("Refused:"));
+        assertThat(onEdt(() -> text.getText())).contains("500 m from the nearest active main");
+    }
+
+    private static void screenshotTo(String out) throws Exception {
+        BufferedImage img = onEdt(() -> {
+            BufferedImage b = new BufferedImage(win.getRootPane().getWidth(), win.getRootPane().getHeight(), BufferedImage.TYPE_INT_RGB);
+            var g = b.createGraphics();
+            win.getRootPane().paint(g);
+            g.dispose();
+            return b;
+        });
+        ImageIO.write(img, "png", Path.of(out).toFile());
     }
 
     private static void screenshotIfAsked() throws Exception {
