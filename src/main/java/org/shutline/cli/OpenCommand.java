@@ -28,6 +28,9 @@ public final class OpenCommand implements Callable<Integer> {
     @Parameters(index = "1", arity = "0..1", paramLabel = "PLAN", description = "a work plan (YAML)")
     private Path plan;
 
+    @picocli.CommandLine.Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML), as for the other commands")
+    private Path mapping;
+
     @Override
     public Integer call() throws InterruptedException {
         if (GraphicsEnvironment.isHeadless()) {
@@ -35,7 +38,7 @@ public final class OpenCommand implements Callable<Integer> {
             spec.commandLine().getErr().flush();
             return 2;
         }
-        for (Path p : new Path[] {network, plan}) {
+        for (Path p : new Path[] {network, plan, mapping}) {
             if (p != null && !Files.exists(p)) {
                 spec.commandLine().getErr().println("open: cannot read " + p + ": no such file or folder");
                 spec.commandLine().getErr().flush();
@@ -45,7 +48,7 @@ public final class OpenCommand implements Callable<Integer> {
         if (System.getProperty("slf4j.internal.verbosity") == null) System.setProperty("slf4j.internal.verbosity", "ERROR");
         java.awt.EventQueue.invokeLater(EdtWatch::installIfAsked);
         CountDownLatch closed = new CountDownLatch(1);
-        MainWindow w = MainWindow.showOn(network, plan);
+        MainWindow w = MainWindow.showOn(network, mapping, plan);
         w.addWindowListener(new java.awt.event.WindowAdapter() {
             @Override public void windowClosed(java.awt.event.WindowEvent e) {
                 closed.countDown();

@@ -214,10 +214,15 @@ public final class MainWindow extends JFrame {
 
     /** Opens a network (and optionally a plan) in the background. */
     public void open(Path network, Path planFile) {
+        open(network, null, planFile);
+    }
+
+    /** Opens a network read through a field-mapping file (null: our own names), and optionally a plan, in the background. */
+    public void open(Path network, Path mapping, Path planFile) {
         if (!confirmDiscard()) return;
-        status("Opening " + network + " ...");
+        status("Opening " + network + (mapping == null ? "" : " with mapping " + mapping.getFileName()) + " ...");
         run(new Task<>("open " + network.getFileName(), p -> {
-            Workspace w = Workspace.load(network, p);
+            Workspace w = Workspace.load(network, mapping, p);
             Plan pl = planFile == null ? null : PlanReader.read(planFile);
             return new Object[] {w, pl};
         }, res -> {
@@ -273,6 +278,22 @@ public final class MainWindow extends JFrame {
             remember("lastNetworkDir", fc);
             open(fc.getSelectedFile().toPath(), null);
         }
+    }
+
+    /** Open network with a field-mapping file: the network, then the mapping (the command line's --mapping). */
+    private void chooseNetworkWithMapping() {
+        JFileChooser fc = chooser("lastNetworkDir");
+        fc.setFileSelectionMode(JFileChooser.FILES_AND_DIRECTORIES);
+        fc.setDialogTitle("Open network (.gpkg or a folder of shapefiles)");
+        if (fc.showOpenDialog(this) != JFileChooser.APPROVE_OPTION) return;
+        remember("lastNetworkDir", fc);
+        Path network = fc.getSelectedFile().toPath();
+        JFileChooser mc = chooser("lastMappingDir");
+        mc.setDialogTitle("Field-mapping file for " + network.getFileName() + " (YAML)");
+        mc.setFileFilter(new javax.swing.filechooser.FileNameExtensionFilter("Field mapping (.yaml, .yml)", "yaml", "yml"));
+        if (mc.showOpenDialog(this) != JFileChooser.APPROVE_OPTION) return;
+        remember("lastMappingDir", mc);
+        open(network, mc.getSelectedFile().toPath(), null);
     }
 
     private void choosePlan() {
@@ -487,6 +508,7 @@ public final class MainWindow extends JFrame {
         JMenuBar mb = new JMenuBar();
         JMenu file = new JMenu("File");
         file.add(item("Open network...", KeyEvent.VK_O, e -> chooseNetwork()));
+        file.add(item("Open network with field mapping...", 0, e -> chooseNetworkWithMapping()));
         file.add(item("Open work plan...", KeyEvent.VK_P, e -> choosePlan()));
         file.add(item("New work plan", 0, e -> {
             if (confirmDiscard()) {
@@ -727,13 +749,18 @@ public final class MainWindow extends JFrame {
 
     /** Opens the window on the event thread (used by the open command). */
     public static MainWindow showOn(Path network, Path planFile) {
+        return showOn(network, null, planFile);
+    }
+
+    /** Opens the window on the event thread with the network read through {@code mapping} (null: our own names). */
+    public static MainWindow showOn(Path network, Path mapping, Path planFile) {
         MainWindow[] w = new MainWindow[1];
         try {
             SwingUtilities.invokeAndWait(() -> {
                 setupLookAndFeel();
                 w[0] = new MainWindow();
                 w[0].setVisible(true);
-                if (network != null) w[0].open(network, planFile);
+                if (network != null) w[0].open(network, mapping, planFile);
             });
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

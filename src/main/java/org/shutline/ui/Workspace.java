@@ -69,14 +69,37 @@ public final class Workspace {
         this.stationIndex = index(n.stations().stream().map(s -> s.id()).toList());
     }
 
-    /** Reads and builds the network at {@code file} (a .gpkg or a shapefile folder). */
+    /** Reads and builds the network at {@code file} (a .gpkg or a shapefile folder) with our own names and the default tolerances. */
     public static Workspace load(Path file, Progress progress) throws InputException {
+        return load(file, null, progress);
+    }
+
+    /**
+     * Reads and builds the network at {@code file} through the field-mapping file
+     * {@code mapping} (null: our own names), with the mapping's tolerances when it gives
+     * them: the same read as the command line's {@code --mapping}, so the window shows the
+     * same findings as {@code check} with that file.
+     */
+    public static Workspace load(Path file, Path mapping, Progress progress) throws InputException {
         if (!Files.exists(file)) throw new InputException("cannot read " + file + ": no such file or folder");
+        if (mapping != null && !Files.isReadable(mapping)) {
+            throw new InputException("cannot read mapping file " + mapping + ": no such file or not readable");
+        }
         progress.begin("read " + file.getFileName(), 0);
-        Network n = NetworkReader.read(file, FieldMapping.DEFAULT);
+        FieldMapping m = mapping == null ? FieldMapping.DEFAULT : FieldMapping.load(mapping);
+        Network n = NetworkReader.read(file, m);
         progress.checkCancelled();
-        Topology t = NetworkBuilder.build(n, Tolerances.DEFAULT, progress);
-        return new Workspace(file, t, n.context(), progress);
+        Topology t = NetworkBuilder.build(n, m.tolerances() == null ? Tolerances.DEFAULT : m.tolerances(), progress);
+        Workspace w = new Workspace(file, t, n.context(), progress);
+        w.mapping = mapping;
+        return w;
+    }
+
+    private Path mapping;
+
+    /** The field-mapping file the network was read with; null for our own names. */
+    public Path mapping() {
+        return mapping;
     }
 
     /** A workspace over an already built topology (tests, generated networks). */
@@ -88,7 +111,9 @@ public final class Workspace {
     public Workspace withContext(ContextLayer layer) {
         List<ContextLayer> c = new ArrayList<>(context);
         c.add(layer);
-        return new Workspace(file, topology, c, Progress.NONE);
+        Workspace w = new Workspace(file, topology, c, Progress.NONE);
+        w.mapping = mapping;
+        return w;
     }
 
     private static Network withoutContext(Network n) {
