@@ -80,6 +80,14 @@ public final class Legend {
                 g.setStroke(Symbols.mainStroke(s, e.rank(), e.status()));
                 g.draw(line);
             }
+            case TEMPORARY_PIPE -> Symbols.temporaryPipe(g, s, line, s.systemColour(Math.max(0, e.rank())),
+                    Symbols.mainWidth(s, Math.max(0, e.rank())));
+            case CUT -> {
+                g.setColor(s.systemColour(0));
+                g.setStroke(s.activeStroke(Symbols.mainWidth(s, 1)));
+                g.draw(line);
+                Symbols.cut(g, s, cx, cy, 0, s.symbolPx());
+            }
             case VALVE -> Symbols.valve(g, s, cx, cy, s.symbolPx(), e.normal(), e.operable());
             case STATION -> Symbols.station(g, s, cx, cy, s.symbolPx() * 1.3);
             case SENSE_TAP -> Symbols.tap(g, s, cx, cy, s.symbolPx());

@@ -35,6 +35,10 @@ public final class MapScene {
     private final List<STRtree> context;
     private final Map<String, Integer> systemRank;
     private final Map<String, Station> stationById;
+    private final StateFeatures state;
+    private final STRtree added;
+    private final Set<Main> temporary;
+    private final Set<org.shutline.model.Valve> addedValves;
 
     public MapScene(Network network) {
         this.network = network;
@@ -62,6 +66,79 @@ public final class MapScene {
             if (s.geometry() != null && !s.geometry().isEmpty()) byId.putIfAbsent(s.id(), s);
         }
         this.stationById = byId;
+        this.state = StateFeatures.NONE;
+        this.added = new STRtree();
+        this.temporary = Set.of();
+        this.addedValves = Set.of();
+    }
+
+    /** The base scene's indexes shared, seen through a state's features (see {@link #withState}). */
+    private MapScene(MapScene base, StateFeatures f) {
+        this.network = base.network;
+        this.mains = base.mains;
+        this.valves = base.valves;
+        this.stations = base.stations;
+        this.taps = base.taps;
+        this.services = base.services;
+        this.sources = base.sources;
+        this.context = base.context;
+        this.systemRank = base.systemRank;
+        this.stationById = base.stationById;
+        this.state = f;
+        STRtree t = new STRtree();
+        Set<Main> temp = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        Set<org.shutline.model.Valve> av = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        for (StateFeatures.AddedPipe p : f.addedPipes()) {
+            t.insert(p.main().geometry().getEnvelopeInternal(), p.main());
+            if (p.temporary()) temp.add(p.main());
+        }
+        for (StateFeatures.AddedValve v : f.addedValves()) {
+            t.insert(v.valve().geometry().getEnvelopeInternal(), v.valve());
+            av.add(v.valve());
+        }
+        for (StateFeatures.Cut c : f.cuts()) t.insert(new Envelope(c.x(), c.x(), c.y(), c.y()), c);
+        t.build();
+        this.added = t;
+        this.temporary = temp;
+        this.addedValves = av;
+    }
+
+    /**
+     * This scene drawing a network state: recorded mains and valves as they stand in the
+     * state (status, open or closed), plus the pipe and valves the plan added and its open
+     * cuts ({@link StateFeatures}). The recorded layers' indexes are shared, so this costs
+     * O(mains + valves + k log k) for k added features. The state must be of this scene's network (the same main
+     * and valve lists: a scene of the network without its context layers is fine).
+     */
+    public MapScene withState(org.shutline.trace.NetworkState s) {
+        if (s.network().mains() != network.mains() || s.network().valves() != network.valves()) {
+            throw new IllegalArgumentException("the state is of another network than the scene");
+        }
+        StateFeatures f = StateFeatures.of(s);
+        return f.isEmpty() && state.isEmpty() ? this : new MapScene(this, f);
+    }
+
+    /** The state's features this scene draws ({@link StateFeatures#NONE} for the network as recorded). */
+    public StateFeatures state() {
+        return state;
+    }
+
+    /** True for pipe the plan added as temporary (a bypass): drawn with its own look and labelled. */
+    public boolean isTemporary(Main m) {
+        return temporary.contains(m);
+    }
+
+    /** True for a valve the plan added (drawn labelled with its id). */
+    public boolean isAdded(org.shutline.model.Valve v) {
+        return addedValves.contains(v);
+    }
+
+    /** Open cuts (cut and capped) in {@code e}. */
+    public List<StateFeatures.Cut> cutsIn(Envelope e) {
+        if (state.cuts().isEmpty()) return List.of();
+        List<StateFeatures.Cut> out = new ArrayList<>();
+        for (Object o : query(added, e)) if (o instanceof StateFeatures.Cut c) out.add(c);
+        return out;
     }
 
     public Network network() {
@@ -71,7 +148,7 @@ public final class MapScene {
     /** Extent of all network features and context, or a null envelope when there are none. */
     public Envelope extent() {
         Envelope e = new Envelope();
-        for (STRtree t : List.of(mains, valves, stations, taps, services, sources)) expand(e, t);
+        for (STRtree t : List.of(mains, valves, stations, taps, services, sources, added)) expand(e, t);
         for (STRtree t : context) expand(e, t);
         return e;
     }
@@ -94,12 +171,24 @@ public final class MapScene {
         return stationById.get(id);
     }
 
+    /** Mains in {@code e}: as they stand in the state drawn, then the pipe the plan added. */
     public List<Main> mainsIn(Envelope e) {
-        return query(mains, e);
+        List<Main> base = query(mains, e);
+        if (state == StateFeatures.NONE) return base;
+        List<Main> out = new ArrayList<>(base.size() + 4);
+        for (Main m : base) out.add(state.main(m));
+        for (Object o : query(added, e)) if (o instanceof Main m) out.add(m);
+        return Collections.unmodifiableList(out);
     }
 
+    /** Valves in {@code e}: open or closed as in the state drawn, then the valves the plan added. */
     public List<org.shutline.model.Valve> valvesIn(Envelope e) {
-        return query(valves, e);
+        List<org.shutline.model.Valve> base = query(valves, e);
+        if (state == StateFeatures.NONE) return base;
+        List<org.shutline.model.Valve> out = new ArrayList<>(base.size() + 4);
+        for (org.shutline.model.Valve v : base) out.add(state.valve(v));
+        for (Object o : query(added, e)) if (o instanceof org.shutline.model.Valve v) out.add(v);
+        return Collections.unmodifiableList(out);
     }
 
     public List<Station> stationsIn(Envelope e) {

@@ -87,12 +87,21 @@ final class PointPainter implements LayerPainter {
     private static void valves(Graphics2D g, PaintContext ctx) {
         MapStyle s = ctx.style();
         Viewport v = ctx.viewport();
+        var font = g.getFont();
         for (Valve valve : ctx.scene().valvesIn(ctx.query(s.symbolPx()))) {
             NormalPosition n = valve.normal() == null ? NormalPosition.DEFAULT : valve.normal();
             Operability o = valve.operable() == null ? Operability.DEFAULT : valve.operable();
-            Symbols.valve(g, s, v.screenX(valve.geometry().getX()), v.screenY(valve.geometry().getY()),
-                    s.symbolPx(), n, o);
+            double x = v.screenX(valve.geometry().getX());
+            double y = v.screenY(valve.geometry().getY());
+            Symbols.valve(g, s, x, y, s.symbolPx(), n, o);
             ctx.drew(LegendEntry.valve(n, o));
+            if (ctx.scene().isAdded(valve) && valve.id() != null) {
+                // a valve the plan adds (a bypass valve) is on no record: its id is written beside it
+                g.setFont(s.font().deriveFont(java.awt.Font.BOLD));
+                Symbols.haloText(g, s, valve.id(), (float) (x + s.symbolPx()), (float) (y + s.symbolPx() * 1.6),
+                        s.foreground());
+                g.setFont(font);
+            }
         }
     }
 

@@ -29,7 +29,10 @@ import org.shutline.model.Severity;
  * <li>source: a five-pointed star;</li>
  * <li>service: a small dot; critical customer: a square with a plus;</li>
  * <li>valve to operate: a circled order number, filled for close, hollow for open;</li>
- * <li>hazard: a triangle with an exclamation mark (critical ones double-outlined).</li>
+ * <li>hazard: a triangle with an exclamation mark (critical ones double-outlined);</li>
+ * <li>temporary pipe (a bypass the plan lays): a dark casing with the system colour in
+ *     short dashes inside, unlike any main's line;</li>
+ * <li>cut and capped: two bars across the pipe with a gap between them.</li>
  * </ul>
  * Each method leaves the paint and stroke of {@code g} as it found them.
  */
@@ -49,6 +52,52 @@ public final class Symbols {
             case PROPOSED -> style.proposedStroke(w);
             case ABANDONED -> style.abandonedStroke();
         };
+    }
+
+    /**
+     * Draws temporary pipe along {@code path} (screen pixels): a casing in the foreground
+     * colour {@code width + 3} px wide, the halo colour inside, then the system colour in
+     * short dashes.
+     */
+    public static void temporaryPipe(Graphics2D g, MapStyle s, Shape path, Color colour, float width) {
+        Color pen = g.getColor();
+        Stroke st = g.getStroke();
+        g.setColor(s.foreground());
+        g.setStroke(new BasicStroke(width + 3f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND));
+        g.draw(path);
+        g.setColor(s.halo());
+        g.setStroke(new BasicStroke(width + 0.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND));
+        g.draw(path);
+        g.setColor(colour);
+        g.setStroke(new BasicStroke(width + 0.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                new float[] {3f, 2.5f}, 0f));
+        g.draw(path);
+        g.setColor(pen);
+        g.setStroke(st);
+    }
+
+    /**
+     * A cut and capped pipe at ({@code cx}, {@code cy}): the pipe blanked over a short gap
+     * and two bars across it, {@code angle} the pipe's direction on screen (radians).
+     */
+    public static void cut(Graphics2D g, MapStyle s, double cx, double cy, double angle, double size) {
+        Color pen = g.getColor();
+        Stroke st = g.getStroke();
+        double ux = Math.cos(angle), uy = Math.sin(angle);
+        double nx = -uy, ny = ux;
+        double gap = Math.max(2.5, size * 0.3);
+        double half = size * 0.8;
+        g.setColor(s.background());
+        g.setStroke(new BasicStroke((float) (gap * 2), BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
+        g.draw(new Line2D.Double(cx - nx * half * 0.6, cy - ny * half * 0.6, cx + nx * half * 0.6, cy + ny * half * 0.6));
+        g.setColor(s.foreground());
+        g.setStroke(new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
+        for (int side = -1; side <= 1; side += 2) {
+            double bx = cx + side * ux * gap, by = cy + side * uy * gap;
+            g.draw(new Line2D.Double(bx - nx * half, by - ny * half, bx + nx * half, by + ny * half));
+        }
+        g.setColor(pen);
+        g.setStroke(st);
     }
 
     public static Stroke controlLineStroke() {

@@ -20,10 +20,7 @@ import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
 import org.shutline.io.GeoPackageWriter;
 import org.shutline.io.WriteLayer;
-import org.shutline.model.Main;
 import org.shutline.model.Network;
-import org.shutline.model.NormalPosition;
-import org.shutline.model.Valve;
 import org.shutline.trace.NetworkState;
 import org.shutline.model.Progress;
 import org.shutline.model.Service;
@@ -144,7 +141,7 @@ public final class ReportBuilder {
         this.options = Objects.requireNonNull(options, "options");
         this.network = view.state().network();
         this.geo = GeoTransform.forCrs(network.crs()).orElse(null);
-        MapPainter p = new MapPainter(new MapScene(drawn(view.state())), MapSheet.printStyle());
+        MapPainter p = new MapPainter(new MapScene(network).withState(view.state()), MapSheet.printStyle());
         this.painter = geo == null ? p : p.withGrid(new UsngGrid(geo));
         this.streets = new StreetLocator(network.context(), network.crs().unit(),
                 network.mains().stream().map(org.shutline.model.Main::geometry).toList());
@@ -180,30 +177,6 @@ public final class ReportBuilder {
      */
     public ReportBuilder withArea(Envelope area) {
         return new ReportBuilder(view, networkFile, plan, planFile, options, area);
-    }
-
-    /**
-     * The network as it stands in a state, for drawing: each main with its status in the
-     * state and each valve open or closed as in the state (valves matched by id, the
-     * first of a repeated id). Pipes and valves a plan adds (bypasses) are not drawn.
-     */
-    static Network drawn(NetworkState s) {
-        Network n = s.network();
-        List<Main> mains = new ArrayList<>(n.mains().size());
-        for (int i = 0; i < n.mains().size(); i++) {
-            Main m = n.mains().get(i);
-            mains.add(i < s.mainCount() && s.mainStatus(i) != m.status() ? m.withStatus(s.mainStatus(i)) : m);
-        }
-        Map<String, Integer> index = ReportView.valveIndex(s);
-        List<Valve> valves = new ArrayList<>(n.valves().size());
-        for (Valve v : n.valves()) {
-            Integer k = index.get(v.id());
-            NormalPosition now = k == null ? v.normal() : s.valveClosed(k) ? NormalPosition.CLOSED : NormalPosition.OPEN;
-            valves.add(now == v.normal() ? v
-                    : new Valve(v.id(), v.systemId(), v.kind(), now, v.operable(), v.checked(), v.geometry()));
-        }
-        return new Network(n.sourceName(), n.crs(), mains, valves, n.stations(), n.taps(), n.services(), n.sources(),
-                n.context(), n.readFindings());
     }
 
     private static LocalDateTime modified(Path p) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.MultiPolygon;
 import org.locationtech.jts.geom.Polygon;
 import org.shutline.analysis.GasOffExtent;
@@ -14,11 +15,13 @@ import org.shutline.io.WriteLayer;
 import org.shutline.io.WriteLayer.Column;
 import org.shutline.io.WriteLayer.ColumnType;
 import org.shutline.io.WriteLayer.GeometryKind;
+import org.shutline.model.NormalPosition;
 import org.shutline.model.Service;
 import org.shutline.model.Station;
 import org.shutline.render.GeoTransform;
 import org.shutline.render.GridReference;
 import org.shutline.render.IsolationRing;
+import org.shutline.render.StateFeatures;
 import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
 
@@ -37,9 +40,17 @@ import org.shutline.trace.NetworkState;
  *     buffered by {@link #SHED_BUFFER_M} metres, as a MultiPolygon, with the services and
  *     meters fed through it and those it feeds alone;</li>
  * <li>{@code isolation_circle}: the incident's isolation circle as a polygon of 64 sides
- *     (incidents at a point only).</li>
+ *     (incidents at a point only);</li>
+ * <li>{@code plan_pipe}: pipe the plan has laid and that is in place in the state drawn
+ *     (a bypass, temporary; a tie-in connection), one MultiLineString row each;</li>
+ * <li>{@code plan_valves}: valves the plan has added and that are in place (a bypass's
+ *     valves), open or closed as in the state;</li>
+ * <li>{@code cuts}: open cuts (cut and capped) in the state.</li>
  * </ul>
- * Polygon layers always hold MultiPolygons, so each layer has one geometry type.
+ * The last three come from {@link StateFeatures}, the same features the maps draw; they are
+ * written for every plan step (empty when the state has none) and for other views only
+ * when the state has some. Polygon layers always hold MultiPolygons and line layers
+ * MultiLineStrings, so each layer has one geometry type.
  */
 public final class ResultLayers {
     /** Buffer around the pipe a station feeds, for its shed polygon, in metres (common practice for maps). */
@@ -55,7 +66,55 @@ public final class ResultLayers {
         out.add(hazards(view));
         out.add(sheds(view));
         if (view.ring() != null) out.add(ring(view));
+        StateFeatures f = StateFeatures.of(view.state());
+        if (view.kind() == ReportView.Kind.STEP || !f.isEmpty()) {
+            out.add(planPipe(view, f));
+            out.add(planValves(view, f));
+            out.add(cuts(view, f));
+        }
         return out;
+    }
+
+    static WriteLayer planPipe(ReportView v, StateFeatures f) {
+        List<Geometry> gs = new ArrayList<>();
+        List<List<Object>> rows = new ArrayList<>();
+        GeometryFactory gf = new GeometryFactory();
+        for (StateFeatures.AddedPipe p : f.addedPipes()) {
+            Geometry g = p.main().geometry();
+            List<LineString> parts = new ArrayList<>();
+            for (int i = 0; i < g.getNumGeometries(); i++) if (g.getGeometryN(i) instanceof LineString l) parts.add(l);
+            gs.add(gf.createMultiLineString(parts.toArray(new LineString[0])));
+            rows.add(row(v, p.main().id(), p.kind(), p.temporary() ? "yes" : "no", p.main().systemId(),
+                    p.main().status().name().toLowerCase(Locale.ROOT)));
+        }
+        return WriteLayer.of("plan_pipe", GeometryKind.LINE, withView(new Column("pipe_id", ColumnType.TEXT),
+                new Column("kind", ColumnType.TEXT), new Column("temporary", ColumnType.TEXT),
+                new Column("system", ColumnType.TEXT), new Column("status", ColumnType.TEXT)), gs, rows);
+    }
+
+    static WriteLayer planValves(ReportView v, StateFeatures f) {
+        List<Geometry> gs = new ArrayList<>();
+        List<List<Object>> rows = new ArrayList<>();
+        for (StateFeatures.AddedValve a : f.addedValves()) {
+            gs.add(a.valve().geometry());
+            rows.add(row(v, a.valve().id(), a.valve().kind() == null ? null : a.valve().kind().name().toLowerCase(Locale.ROOT),
+                    a.valve().normal() == NormalPosition.CLOSED ? "closed" : "open", a.temporary() ? "yes" : "no",
+                    a.valve().systemId()));
+        }
+        return WriteLayer.of("plan_valves", GeometryKind.POINT, withView(new Column("valve_id", ColumnType.TEXT),
+                new Column("kind", ColumnType.TEXT), new Column("position", ColumnType.TEXT),
+                new Column("temporary", ColumnType.TEXT), new Column("system", ColumnType.TEXT)), gs, rows);
+    }
+
+    static WriteLayer cuts(ReportView v, StateFeatures f) {
+        GeometryFactory gf = new GeometryFactory();
+        List<Geometry> gs = new ArrayList<>();
+        List<List<Object>> rows = new ArrayList<>();
+        for (StateFeatures.Cut c : f.cuts()) {
+            gs.add(gf.createPoint(new org.locationtech.jts.geom.Coordinate(c.x(), c.y())));
+            rows.add(row(v, c.mainId()));
+        }
+        return WriteLayer.of("cuts", GeometryKind.POINT, withView(new Column("main_id", ColumnType.TEXT)), gs, rows);
     }
 
     private static List<Column> withView(Column... cols) {

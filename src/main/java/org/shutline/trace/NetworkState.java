@@ -226,6 +226,18 @@ public final class NetworkState {
         return f == v ? edgeTo(e) : f;
     }
 
+    /** Number of cuts in this state (pipe edges replaced by two pieces), ordered by the cut edge. */
+    public int cutCount() { return splits.size(); }
+
+    /** The pipe edge cut by cut {@code i}; its pieces are {@link #cutFirstPiece} and the edge after it. */
+    public int cutEdge(int i) { return splits.keyAt(i); }
+
+    /** The first piece of cut {@code i} (ending at the cut); the second piece is the next edge index. */
+    public int cutFirstPiece(int i) { return splits.intAt(i); }
+
+    /** Measure of cut {@code i} along its edge's main. */
+    public double cutMeasure(int i) { return splits.doubleAt(i); }
+
     /** True when the edge was removed (cut out, or an added bypass taken off). */
     public boolean isRemoved(int e) {
         return !removed.isEmpty() && removed.contains(e);

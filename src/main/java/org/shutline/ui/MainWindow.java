@@ -187,7 +187,13 @@ public final class MainWindow extends JFrame {
 
     /** Shows a panel's overlays and highlighted features on the map (replacing the previous panel's). */
     void showPanelMarks(MapOverlays o, List<Geometry> highlight) {
+        showPanelMarks(o, highlight, null);
+    }
+
+    /** The same on the map of a network state (a plan step's; null for the network as recorded). */
+    void showPanelMarks(MapOverlays o, List<Geometry> highlight, org.shutline.trace.NetworkState state) {
         panelHighlight = List.copyOf(highlight);
+        map.setState(state);
         map.setOverlays(o);
         pushHighlights();
     }

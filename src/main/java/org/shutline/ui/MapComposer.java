@@ -18,6 +18,7 @@ import org.locationtech.jts.geom.Polygon;
 import org.shutline.render.LayerPainter;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapPainter;
+import org.shutline.render.MapScene;
 import org.shutline.render.MapStyle;
 import org.shutline.render.PaintContext;
 import org.shutline.render.UsngGrid;
@@ -58,7 +59,17 @@ final class MapComposer {
     /** As above; without {@code background} the picture is drawn over what {@code g} holds (the overview case). */
     static void paint(Graphics2D g, Viewport v, Workspace ws, MapStyle style, MapLayers layers, MapOverlays overlays,
                       List<Highlight> highlights, boolean antialias, boolean background) {
-        MapPainter net = new MapPainter(ws.scene(), style).withAntialias(antialias);
+        paint(g, v, ws, ws.scene(), style, layers, overlays, highlights, antialias, background);
+    }
+
+    /**
+     * As above, drawing {@code scene}: the workspace's scene, or that scene seen through a
+     * network state ({@link org.shutline.render.MapScene#withState}), so a plan step's map
+     * shows the pipe and valves the plan added, its cuts, and what it closed and abandoned.
+     */
+    static void paint(Graphics2D g, Viewport v, Workspace ws, MapScene scene, MapStyle style, MapLayers layers,
+                      MapOverlays overlays, List<Highlight> highlights, boolean antialias, boolean background) {
+        MapPainter net = new MapPainter(scene, style).withAntialias(antialias);
         List<LayerPainter> painters = net.layers(overlays);
         if (painters.size() != 10) throw new IllegalStateException("render's layer list changed: " + painters.size() + " layers");
         Shape oldClip = g.getClip();
@@ -71,7 +82,7 @@ final class MapComposer {
             g.setColor(style.background());
             g.fillRect(0, 0, v.width(), v.height());
         }
-        PaintContext ctx = new PaintContext(ws.scene(), style, v);
+        PaintContext ctx = new PaintContext(scene, style, v);
         boolean highlighted = layers.entries().stream().noneMatch(e -> e.net() == MapLayers.Net.MAINS);
         if (highlighted) for (Highlight h : highlights) highlight(g, v, h);
         for (MapLayers.Entry e : layers.entries()) {
@@ -82,8 +93,8 @@ final class MapComposer {
             if (!e.visible()) continue;
             if (e.isContext()) {
                 if (e.context() >= ws.context().size()) continue;
-                var scene = ws.contextScene(e.context());
-                new MapPainter(scene, style).layers(MapOverlays.NONE).get(0).paint(g, new PaintContext(scene, style, v));
+                var cs = ws.contextScene(e.context());
+                new MapPainter(cs, style).layers(MapOverlays.NONE).get(0).paint(g, new PaintContext(cs, style, v));
                 continue;
             }
             switch (e.net()) {

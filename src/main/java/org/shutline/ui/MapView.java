@@ -28,6 +28,8 @@ import javax.swing.SwingUtilities;
 import org.locationtech.jts.geom.Envelope;
 import org.shutline.model.Caution;
 import org.shutline.render.MapOverlays;
+import org.shutline.render.MapScene;
+import org.shutline.trace.NetworkState;
 import org.shutline.render.MapStyle;
 import org.shutline.render.ScaleBar;
 import org.shutline.render.Viewport;
@@ -54,8 +56,8 @@ public final class MapView extends JComponent {
         default void cursor(double x, double y) {}
     }
 
-    private record Snapshot(Viewport viewport, Workspace ws, MapStyle style, MapLayers layers, MapOverlays overlays,
-                            List<MapComposer.Highlight> highlights, long generation) {}
+    private record Snapshot(Viewport viewport, Workspace ws, MapScene scene, MapStyle style, MapLayers layers,
+                            MapOverlays overlays, List<MapComposer.Highlight> highlights, long generation) {}
 
     private record Frame(BufferedImage image, Viewport viewport, long generation) {}
 
@@ -70,6 +72,8 @@ public final class MapView extends JComponent {
     private final AtomicBoolean queued = new AtomicBoolean();
     private Listener listener = new Listener() {};
     private Workspace ws;
+    private NetworkState state;
+    private MapScene scene;
     private MapStyle style = MapStyle.LIGHT;
     private MapLayers layers = MapLayers.defaults(List.of());
     private MapOverlays overlays = MapOverlays.NONE;
@@ -128,6 +132,8 @@ public final class MapView extends JComponent {
     /** Shows a workspace, fitted to its extent. */
     public void setWorkspace(Workspace w) {
         this.ws = w;
+        this.state = null;
+        this.scene = w.scene();
         List<String> names = w.context().stream().map(c -> c.name()).toList();
         this.layers = MapLayers.defaults(names);
         this.frame = null;
@@ -137,6 +143,8 @@ public final class MapView extends JComponent {
     /** Keeps the viewport and layer settings; for a workspace with one more context layer. */
     public void replaceWorkspace(Workspace w, MapLayers l) {
         this.ws = w;
+        this.scene = state == null || state.network().mains() != w.network().mains() ? w.scene() : w.scene().withState(state);
+        if (scene == w.scene()) state = null;
         this.layers = l;
         requestRender();
     }
@@ -161,6 +169,20 @@ public final class MapView extends JComponent {
         style = s;
         requestRender();
     }
+
+    /**
+     * Draws the network as it stands in {@code s} (a plan step's state: what the plan
+     * added, cut, closed and abandoned); null for the network as recorded.
+     */
+    public void setState(NetworkState s) {
+        if (ws == null) return;
+        state = s;
+        scene = s == null ? ws.scene() : ws.scene().withState(s);
+        requestRender();
+    }
+
+    /** The scene drawn: the workspace's, or it seen through the state set by {@link #setState}. */
+    public MapScene scene() { return scene == null && ws != null ? ws.scene() : scene; }
 
     public void setOverlays(MapOverlays o) {
         overlays = o;
@@ -212,7 +234,7 @@ public final class MapView extends JComponent {
             repaint();
             return;
         }
-        pending.set(new Snapshot(viewport, ws, style, layers, overlays, highlights, ++generation));
+        pending.set(new Snapshot(viewport, ws, scene(), style, layers, overlays, highlights, ++generation));
         if (!queued.getAndSet(true)) renderer.execute(this::renderLoop);
         repaint();
     }
@@ -224,10 +246,12 @@ public final class MapView extends JComponent {
             long t0 = System.nanoTime();
             BufferedImage img;
             Overview ov = overview;
-            if (Overview.wanted(s.ws()) && ov != null && ov.serves(s.ws(), s.style(), s.layers(), s.viewport())) {
+            // the overview picture holds the network as recorded: a state's map is always drawn in full
+            boolean recorded = s.scene() == s.ws().scene();
+            if (recorded && Overview.wanted(s.ws()) && ov != null && ov.serves(s.ws(), s.style(), s.layers(), s.viewport())) {
                 img = ov.render(s.viewport(), s.overlays(), s.highlights());
             } else {
-                img = render(s.viewport(), s.ws(), s.style(), s.layers(), s.overlays(), s.highlights(), true);
+                img = render(s.viewport(), s.ws(), s.scene(), s.style(), s.layers(), s.overlays(), s.highlights(), true);
             }
             if (Overview.wanted(s.ws()) && (ov == null || !ov.matches(s.ws(), s.style(), s.layers()))) buildOverview(s);
             double ms = (System.nanoTime() - t0) / 1e6;
@@ -257,10 +281,16 @@ public final class MapView extends JComponent {
     /** Paints a picture synchronously (the render thread, exports of the view, tests). */
     static BufferedImage render(Viewport v, Workspace ws, MapStyle style, MapLayers layers, MapOverlays overlays,
                                 List<MapComposer.Highlight> highlights, boolean antialias) {
+        return render(v, ws, ws.scene(), style, layers, overlays, highlights, antialias);
+    }
+
+    /** The same drawing {@code scene} (the workspace's scene seen through a state). */
+    static BufferedImage render(Viewport v, Workspace ws, MapScene scene, MapStyle style, MapLayers layers,
+                                MapOverlays overlays, List<MapComposer.Highlight> highlights, boolean antialias) {
         BufferedImage img = new BufferedImage(v.width(), v.height(), BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
-            MapComposer.paint(g, v, ws, style, layers, overlays, highlights, antialias);
+            MapComposer.paint(g, v, ws, scene, style, layers, overlays, highlights, antialias, true);
         } finally {
             g.dispose();
         }
@@ -269,7 +299,7 @@ public final class MapView extends JComponent {
 
     /** The current view as a picture, painted on the calling thread. */
     public BufferedImage renderNow(boolean antialias) {
-        return render(viewport, ws, style, layers, overlays, highlights, antialias);
+        return render(viewport, ws, scene(), style, layers, overlays, highlights, antialias);
     }
 
     @Override

@@ -290,7 +290,8 @@ final class PlanPanel extends JPanel {
         details.setCaretPosition(0);
         markChart(i);
         MapOverlays o = PlanRun.overlays(window.workspace(), s);
-        window.showPanelMarks(o, List.of());
+        // the map draws the step's state: the bypass laid, the cuts, the valves closed, the mains abandoned
+        window.showPanelMarks(o, List.of(), r.states().steps().get(i).after());
         followStep(o);
         window.status("Step " + s.step().number() + ": " + s.step().describe());
     }
