@@ -425,14 +425,7 @@ class MainWindowDisplayTest {
     private static void screenshotIfAsked() throws Exception {
         String out = System.getProperty("shutline.screenshot");
         if (out == null || out.isBlank()) return;
-        BufferedImage img = onEdt(() -> {
-            BufferedImage b = new BufferedImage(win.getRootPane().getWidth(), win.getRootPane().getHeight(), BufferedImage.TYPE_INT_RGB);
-            var g = b.createGraphics();
-            win.getRootPane().paint(g);
-            g.dispose();
-            return b;
-        });
-        ImageIO.write(img, "png", Path.of(out).toFile());
+        screenshotTo(out);
     }
 
     private static Component find(Container c, String name) {
