@@ -8,19 +8,26 @@ import org.shutline.trace.ValveSegments;
  * The plain reference for {@link OutageTables}: one traversal of the segment graph
  * from the sources per case. Isolating segment s: the region is s grown across open
  * inoperable valves, never entered. A station out: its link never crossed. Valve v
- * failing: the region is both its sides grown across open inoperable valves. Services
- * off = services in segments fed before and not reached. O(cases x (segments + links)):
- * for tests and as the benchmark baseline, not for use on large networks.
+ * failing: the region is both its sides grown across open inoperable valves. A station
+ * that feeds a region straight in (outlet in it, fed inlet outside) is stopped as the
+ * instruction says: its {@link StationStop} region never entered when valves do it
+ * (the stop itself is checked by re-trace in {@link InstructionCheck}), else its link
+ * never crossed. Services off = services in segments fed before and not reached.
+ * O(cases x (segments + links)): for tests and as the benchmark baseline, not for use
+ * on large networks.
  */
 public final class BruteForceOutages {
     private final ValveSegments segs;
     private final SegmentGraph sg;
     private final BitSet before;
 
+    private final Isolation stops;
+
     public BruteForceOutages(ValveSegments segs) {
         this.segs = segs;
         this.sg = segs.graph();
         this.before = sg.reachFromSources(null, null);
+        this.stops = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
     }
 
     public long servicesOffWhenIsolated(int segment) {
@@ -88,7 +95,19 @@ public final class BruteForceOutages {
     }
 
     private long[] off(BitSet region, BitSet blockedLinks) {
-        BitSet after = sg.reachFromSources(region, blockedLinks);
+        BitSet blocked = (BitSet) region.clone();
+        for (int st = 0; st < segs.state().stationCount(); st++) {
+            int l = sg.stationLink(st);
+            if (l < 0 || !sg.isOpen(l) || !region.get(sg.linkB(l)) || region.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
+            StationStop.Result stop = stops.stationStop(st);
+            if (stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+                blocked.or(stop.isolation().region());
+            } else {
+                if (blockedLinks == null) blockedLinks = new BitSet(sg.linkCount());
+                blockedLinks.set(l);
+            }
+        }
+        BitSet after = sg.reachFromSources(blocked, blockedLinks);
         BitSet lost = (BitSet) before.clone();
         lost.andNot(after);
         long[] out = new long[2];

@@ -91,19 +91,26 @@ public final class InstructionCheck {
     /** The outcome of one instruction applied to the state. */
     private record Outcome(BitSet live, BitSet off) {}
 
-    private Outcome apply(Collection<Integer> valveIdx, Collection<String> valveIds, Collection<String> stop, Collection<String> shut,
-                          String query) {
+    /**
+     * The state with the instruction done. A station to stop is stopped the way the
+     * instruction says: by closing its stop's valves when {@code stops} has a stop of it
+     * that valves do, else at the station itself (out of service).
+     */
+    private Outcome apply(Collection<Integer> valveIdx, Collection<String> valveIds, Collection<String> stop,
+                          Collection<StationStop.Result> stops, Collection<String> shut, String query) {
         NetworkState t = state;
         for (int v : valveIdx) t = t.withValveClosed(v, true);
-        for (String id : valveIds) {
-            List<Integer> vs = valves.get(id);
-            if (vs == null) throw new UnverifiedInstructionException(query, "valve " + id + " is not in the network");
-            for (int v : vs) t = t.withValveClosed(v, true);
-        }
+        for (String id : valveIds) t = close(t, id, query);
         for (String id : stop) {
             Integer st = stations.get(id);
             if (st == null) throw new UnverifiedInstructionException(query, "station " + id + " is not in the network");
-            t = t.withStationInService(st, false);
+            StationStop.Result how = null;
+            for (StationStop.Result r : stops) if (r.stationId().equals(id)) how = r;
+            if (how != null && how.stoppable() && how.isolation() != null && how.isolation().isolable()) {
+                for (String v : how.valves()) t = close(t, v, query);
+            } else {
+                t = t.withStationInService(st, false);
+            }
         }
         BitSet shutSources = new BitSet();
         for (String id : shut) {
@@ -117,11 +124,18 @@ public final class InstructionCheck {
         return new Outcome(live, off);
     }
 
+    private NetworkState close(NetworkState t, String id, String query) {
+        List<Integer> vs = valves.get(id);
+        if (vs == null) throw new UnverifiedInstructionException(query, "valve " + id + " is not in the network");
+        for (int v : vs) t = t.withValveClosed(v, true);
+        return t;
+    }
+
     void isolation(Isolation.Result r, String query) {
         List<Integer> idx = new ArrayList<>();
         for (Isolation.ValveStep v : r.valves()) idx.add(v.valve());
         String what = "valves " + r.valveIds();
-        Outcome o = apply(idx, List.of(), r.stationsToStop(), r.sourcesInRegion(), query);
+        Outcome o = apply(idx, List.of(), r.stationsToStop(), r.stationStops(), r.sourcesInRegion(), query);
         deadRegion(o, r.region(), query, what);
         sameServices(o.off, ids(r.servicesOff()), query, what);
         sameMeters(o.off, r.metersOff(), query, what);
@@ -129,16 +143,16 @@ public final class InstructionCheck {
         for (Isolation.Fallback f : r.fallbacks()) {
             String fw = "fallback for " + f.valveId() + " (valves " + f.valves() + ")";
             if (f.valves().contains(f.valveId())) throw new UnverifiedInstructionException(query, fw + " closes the valve that failed");
-            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.sourcesInRegion(), query);
+            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.stationStops(), f.sourcesInRegion(), query);
             deadRegion(fo, r.region(), query, fw);
-            added(fo, base, f.addedServices(), r.metersOff() + f.addedMeters(), query, fw);
+            added(fo, base, f.addedServices(), f.stayOnServices(), r.metersOff() + f.addedMeters() - f.stayOnMeters(), query, fw);
         }
         if (r.alternative().isPresent()) {
             Isolation.Alternative a = r.alternative().get();
             String aw = "alternative (valves " + a.valves() + ")";
-            Outcome ao = apply(List.of(), a.valves(), a.stationsToStop(), a.sourcesInRegion(), query);
+            Outcome ao = apply(List.of(), a.valves(), a.stationsToStop(), a.stationStops(), a.sourcesInRegion(), query);
             deadRegion(ao, r.region(), query, aw);
-            added(ao, base, a.addedServices(), r.metersOff() + a.addedMeters(), query, aw);
+            added(ao, base, a.addedServices(), a.stayOnServices(), r.metersOff() + a.addedMeters() - a.stayOnMeters(), query, aw);
         }
         for (StationStop.Result stop : r.stationStops()) stationStop(stop, query + ", stop of station " + stop.stationId());
     }
@@ -147,7 +161,7 @@ public final class InstructionCheck {
         int e = state.stationEdge(r.station());
         int inlet = e < 0 || state.isRemoved(e) ? -1 : state.edgeFrom(e);
         if (r.isolation() == null) {
-            Outcome o = apply(List.of(), List.of(), List.of(), List.of(), query);
+            Outcome o = apply(List.of(), List.of(), List.of(), List.of(), List.of(), query);
             if (inlet >= 0 && state.stationInService(r.station()) && o.live.get(inlet)) {
                 throw new UnverifiedInstructionException(query, "station " + r.stationId() + " is said to pass no gas (" + r.note() + ") but its inlet is live");
             }
@@ -159,12 +173,12 @@ public final class InstructionCheck {
         if (!r.valves().equals(r.isolation().valveIds())) {
             throw new UnverifiedInstructionException(query, "stop valves " + r.valves() + " differ from its isolation's " + r.isolation().valveIds());
         }
-        Outcome o = apply(idx, List.of(), r.isolation().stationsToStop(), r.isolation().sourcesInRegion(), query);
+        Outcome o = apply(idx, List.of(), r.isolation().stationsToStop(), r.isolation().stationStops(), r.isolation().sourcesInRegion(), query);
         if (inlet >= 0 && o.live.get(inlet)) {
             throw new UnverifiedInstructionException(query, "station " + r.stationId() + " still has gas at its inlet with " + r.valves() + " closed");
         }
         for (Isolation.Fallback f : r.isolation().fallbacks()) {
-            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.sourcesInRegion(), query);
+            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.stationStops(), f.sourcesInRegion(), query);
             if (inlet >= 0 && fo.live.get(inlet)) {
                 throw new UnverifiedInstructionException(query, "station " + r.stationId() + " still has gas at its inlet with the fallback for "
                         + f.valveId() + " (" + f.valves() + ") closed");
@@ -194,7 +208,7 @@ public final class InstructionCheck {
                 shut.addAll(f.upstream().sourcesInRegion());
             }
         }
-        Outcome o = apply(idx, List.of(), stop, shut, query);
+        Outcome o = apply(idx, List.of(), stop, List.of(), shut, query);
         int sys = state.graph().systemIndex(r.systemId());
         if (sys >= 0) {
             for (int n = 0; n < state.nodeCount(); n++) {
@@ -218,7 +232,7 @@ public final class InstructionCheck {
             throw new UnverifiedInstructionException(query, "suggested order " + sug.order() + " is not the step's valves " + stepValves);
         }
         if (sug.fallbacks().isEmpty()) return;
-        Outcome step = apply(List.of(), stepValves, List.of(), List.of(), query);
+        Outcome step = apply(List.of(), stepValves, List.of(), List.of(), List.of(), query);
         BitSet cutOff = new BitSet();
         BitSet liveBefore = FeedTrace.liveNodes(state, null);
         for (int n = liveBefore.nextSetBit(0); n >= 0; n = liveBefore.nextSetBit(n + 1)) if (!step.live.get(n)) cutOff.set(n);
@@ -227,11 +241,11 @@ public final class InstructionCheck {
         for (Isolation.Fallback f : sug.fallbacks()) {
             String fw = "fallback for " + f.valveId() + " (valves " + f.valves() + ")";
             if (f.valves().contains(f.valveId())) throw new UnverifiedInstructionException(query, fw + " closes the valve that failed");
-            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.sourcesInRegion(), query);
+            Outcome fo = apply(List.of(), f.valves(), f.stationsToStop(), f.stationStops(), f.sourcesInRegion(), query);
             for (int n = cutOff.nextSetBit(0); n >= 0; n = cutOff.nextSetBit(n + 1)) {
                 if (fo.live.get(n)) throw new UnverifiedInstructionException(query, fw + " leaves gas in what the step cuts off");
             }
-            added(fo, base, f.addedServices(), baseMeters + f.addedMeters(), query, fw);
+            added(fo, base, f.addedServices(), f.stayOnServices(), baseMeters + f.addedMeters() - f.stayOnMeters(), query, fw);
         }
     }
 
@@ -246,10 +260,13 @@ public final class InstructionCheck {
         }
     }
 
-    private void added(Outcome o, Set<String> base, List<String> addedIds, long meters, String query, String what) {
+    private void added(Outcome o, Set<String> base, List<String> addedIds, List<String> stayOnIds, long meters, String query, String what) {
         Set<String> expected = new HashSet<>(base);
         for (String id : addedIds) {
             if (!expected.add(id)) throw new UnverifiedInstructionException(query, what + ": service " + id + " is said to be added but is off already");
+        }
+        for (String id : stayOnIds) {
+            if (!expected.remove(id)) throw new UnverifiedInstructionException(query, what + ": service " + id + " is said to stay on but the plan does not put it off");
         }
         sameServices(o.off, expected, query, what);
         sameMeters(o.off, meters, query, what);

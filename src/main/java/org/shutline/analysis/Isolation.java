@@ -96,34 +96,40 @@ public final class Isolation {
      * besides the valves (the outcome is computed as if they were).
      */
     public record Fallback(String valveId, String why, boolean isolable, List<String> valves, List<String> thenClose,
-                           List<String> addedServices, long addedMeters, List<String> stationsToStop, List<String> sourcesInRegion) {
+                           List<String> addedServices, long addedMeters, List<String> stationsToStop, List<String> sourcesInRegion,
+                           List<StationStop.Result> stationStops, List<String> stayOnServices, long stayOnMeters) {
         public Fallback {
+            stayOnServices = stayOnServices instanceof ServiceIdList ? stayOnServices : List.copyOf(stayOnServices);
             valves = List.copyOf(valves);
             thenClose = List.copyOf(thenClose);
             addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
             stationsToStop = List.copyOf(stationsToStop);
             sourcesInRegion = List.copyOf(sourcesInRegion);
+            stationStops = List.copyOf(stationStops);
         }
 
         /** A fallback that valves alone achieve (nothing to stop or shut besides). */
         public Fallback(String valveId, String why, boolean isolable, List<String> valves, List<String> thenClose,
                         List<String> addedServices, long addedMeters) {
-            this(valveId, why, isolable, valves, thenClose, addedServices, addedMeters, List.of(), List.of());
+            this(valveId, why, isolable, valves, thenClose, addedServices, addedMeters, List.of(), List.of(), List.of(), List.of(), 0);
         }
     }
 
     /** A smaller valve set at the cost of more services off. */
     public record Alternative(List<String> valves, List<String> addedServices, long addedMeters, List<String> stationsToStop,
-                              List<String> sourcesInRegion) {
+                              List<String> sourcesInRegion, List<StationStop.Result> stationStops, List<String> stayOnServices,
+                              long stayOnMeters) {
         public Alternative {
+            stayOnServices = stayOnServices instanceof ServiceIdList ? stayOnServices : List.copyOf(stayOnServices);
             valves = List.copyOf(valves);
             addedServices = addedServices instanceof ServiceIdList ? addedServices : List.copyOf(addedServices);
             stationsToStop = List.copyOf(stationsToStop);
             sourcesInRegion = List.copyOf(sourcesInRegion);
+            stationStops = List.copyOf(stationStops);
         }
 
         public Alternative(List<String> valves, List<String> addedServices, long addedMeters) {
-            this(valves, addedServices, addedMeters, List.of(), List.of());
+            this(valves, addedServices, addedMeters, List.of(), List.of(), List.of(), List.of(), 0);
         }
     }
 
@@ -245,11 +251,55 @@ public final class Isolation {
                         || (grown.listed.size() == alt.valves().size()
                             && addedCount(core, grown) < alt.addedServices().size()))) {
                 BitSet addedSegs = addedSegments(core, grown);
+                BitSet stayOn = addedSegments(grown, core);
                 alt = new Alternative(ordered(grown), ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs),
-                        stationIds(grown.stations), grown.sources);
+                        stationIds(grown.stations), grown.sources, grown.stops(),
+                        ServiceIdList.owning(state.network().services(), servicesOf(stayOn)), metersOf(stayOn));
+            }
+        }
+        if (stopFallbacks.get() == 0) {
+            stopFallbacks.set(1);
+            try {
+                for (StationStop.Result stop : core.byValves) stopValveFallbacks(core, stop, fallbacks);
+            } finally {
+                stopFallbacks.set(0);
             }
         }
         return result(zoneSegs, core, fallbacks, alt);
+    }
+
+    /** Set while stop-valve fallbacks are computed on this thread: the grown stops they isolate get none of their own. */
+    private static final ThreadLocal<Integer> stopFallbacks = ThreadLocal.withInitial(() -> 0);
+
+    /**
+     * A fallback for each doubtful valve of a station stop the isolation relies on: the
+     * stop grown across that valve ({@link StationStop#grownBy}), the whole outcome
+     * recomputed with it; what it adds is counted against the whole isolation, and the
+     * station is stopped at the station itself when the grown stop is not done by valves.
+     */
+    private void stopValveFallbacks(Core core, StationStop.Result stop, List<Fallback> out) {
+        Result stopIso = stop.isolation();
+        for (Fallback sf : stopIso.fallbacks()) {
+            int v = -1;
+            for (ValveStep step : stopIso.valves()) if (step.valveId().equals(sf.valveId())) v = step.valve();
+            if (v < 0) continue;
+            boolean known = false;
+            for (Fallback f : out) if (f.valveId().equals(sf.valveId())) known = true;
+            if (known) continue;
+            StationStop.Result grown = StationStop.grownBy(this, stop, v);
+            Core g = core(core.region, true, stop.station(), grown);
+            List<String> then = new ArrayList<>();
+            List<String> already = new ArrayList<>(ordered(core));
+            for (StationStop.Result st : core.stops()) already.addAll(st.valves());
+            for (String id : ordered(g)) if (!already.contains(id) && !then.contains(id)) then.add(id);
+            for (StationStop.Result st : g.stops()) for (String id : st.valves()) if (!already.contains(id) && !then.contains(id)) then.add(id);
+            BitSet addedSegs = addedSegments(core, g);
+            BitSet stayOn = addedSegments(g, core);
+            out.add(new Fallback(sf.valveId(), sf.why(), g.sources.isEmpty() && g.stations.isEmpty(), ordered(g), then,
+                    ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs),
+                    stationIds(g.stations), g.sources, g.stops(),
+                    ServiceIdList.owning(state.network().services(), servicesOf(stayOn)), metersOf(stayOn)));
+        }
     }
 
     /**
@@ -261,6 +311,17 @@ public final class Isolation {
         BitSet c = (BitSet) b.clone();
         c.set(seg);
         return c;
+    }
+
+    /** {@code region} grown across valve {@code v}: both its sides, and on across open inoperable valves. */
+    BitSet grownAcross(BitSet region, int v) {
+        int l = sg.valveLink(v);
+        BitSet seed = new BitSet(sg.segmentCount());
+        if (l >= 0) {
+            seed.set(sg.linkA(l));
+            seed.set(sg.linkB(l));
+        }
+        return growInto((BitSet) region.clone(), seed);
     }
 
     private BitSet grownBy(BitSet region, int seg) {
@@ -285,6 +346,24 @@ public final class Isolation {
         int unlistedCount;
         final List<String> sources = new ArrayList<>();
         final List<Integer> stations = new ArrayList<>();
+        /** The stops of {@link #stations} that valves do (closed in this outcome); the others are stopped at the station. */
+        final List<StationStop.Result> byValves = new ArrayList<>();
+
+        /** The stop of each station to stop as this outcome does it (by valves, or at the station when none is listed). */
+        List<StationStop.Result> stops() {
+            List<StationStop.Result> out = new ArrayList<>(byValves);
+            for (int st : stations) {
+                boolean listed = false;
+                for (StationStop.Result r : byValves) if (r.station() == st) listed = true;
+                if (listed) continue;
+                StationStop.Result r = st == replacedStation ? replacement : stationStop(st);
+                if (r != null) out.add(r);
+            }
+            return out;
+        }
+
+        int replacedStation = -1;
+        StationStop.Result replacement;
 
         /** Services off: those of the off segments (each service lies in one segment). */
         BitSet offServices() {
@@ -324,22 +403,42 @@ public final class Isolation {
      * same order (region segment, then link index).
      */
     private Core core(BitSet region, boolean report) {
+        return core(region, report, -1, null);
+    }
+
+    /**
+     * As {@link #core(BitSet, boolean)}, with station {@code replaced}'s stop taken to be
+     * {@code replacement} (a stop grown because one of its valves will not close) when
+     * that station feeds the region.
+     */
+    private Core core(BitSet region, boolean report, int replaced, StationStop.Result replacement) {
         Core c = new Core();
         c.region = region;
+        c.replacedStation = replaced;
+        c.replacement = replacement;
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
         }
         BitSet stopped = new BitSet(state.stationCount());
+        BitSet blocked = c.region;
         for (int st = 0; st < state.stationCount(); st++) {
             int l = sg.stationLink(st);
             if (l < 0 || !sg.isOpen(l)) continue;
             if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
                 c.stations.add(st);
-                stopped.set(st);
+                StationStop.Result stop = st == replaced ? replacement : stationStop(st);
+                if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+                    // the instruction closes the stop's valves: its inlet-side region goes dead with everything fed only through it
+                    if (blocked == c.region) blocked = (BitSet) c.region.clone();
+                    blocked.or(stop.isolation().region());
+                    c.byValves.add(stop);
+                } else {
+                    stopped.set(st);
+                }
             }
         }
-        c.after = sg.reachFromSourcesStopping(c.region, stopped);
+        c.after = sg.reachFromSourcesStopping(blocked, stopped);
         if (!report && crossLinks(c.after) < crossLinks(c.region)) {
             listedFromFedSide(c);
         } else {
@@ -348,6 +447,23 @@ public final class Isolation {
         c.off = (BitSet) before.clone();
         c.off.andNot(c.after);
         return c;
+    }
+
+    /**
+     * The counts of one isolation without its valve lists, fallbacks or ids: services,
+     * meters and critical services off, the valves to close, whether valves alone do it.
+     */
+    record Counts(long services, long meters, long critical, int valves, boolean isolable) {}
+
+    /** {@link Counts} of isolating {@code seed} (grown across open inoperable valves); same rules as {@link #isolate}. */
+    Counts counts(BitSet seed) {
+        Core c = core(grow(seed), false);
+        long n = 0;
+        for (int seg = c.off.nextSetBit(0); seg >= 0; seg = c.off.nextSetBit(seg + 1)) n += segs.serviceCount(seg);
+        BitSet off = c.offServices();
+        long crit = 0;
+        for (int i = critical.nextSetBit(0); i >= 0; i = critical.nextSetBit(i + 1)) if (off.get(i)) crit++;
+        return new Counts(n, metersOf(c.off), crit, c.listed.size(), c.sources.isEmpty() && c.stations.isEmpty());
     }
 
     private int crossLinks(BitSet set) {
@@ -474,15 +590,20 @@ public final class Isolation {
         List<String> then = new ArrayList<>();
         for (String id : all) if (!before.contains(id)) then.add(id);
         BitSet addedSegs = addedSegments(core, grown);
+        BitSet stayOn = addedSegments(grown, core);
         boolean isolable = grown.sources.isEmpty() && grown.stations.isEmpty();
         return new Fallback(state.valveId(v), why, isolable, all, then, ServiceIdList.owning(state.network().services(), servicesOf(addedSegs)), metersOf(addedSegs),
-                stationIds(grown.stations), grown.sources);
+                stationIds(grown.stations), grown.sources, grown.stops(),
+                ServiceIdList.owning(state.network().services(), servicesOf(stayOn)), metersOf(stayOn));
     }
 
     /**
      * Segments off in {@code grown} but not in {@code core}. Services off are the union of
      * the services of the off segments and every service lies in one segment, so the
-     * services added are exactly those of these segments.
+     * services added are exactly those of these segments. Swapped, the segments the
+     * plan puts off that {@code grown} leaves fed: a grown region that takes in a
+     * station's inlet no longer needs that station's stop, so pipe the stop would have
+     * shut stays on.
      */
     private static BitSet addedSegments(Core core, Core grown) {
         BitSet add = (BitSet) grown.off.clone();

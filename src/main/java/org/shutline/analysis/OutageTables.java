@@ -53,6 +53,8 @@ public final class OutageTables {
     private final long[] unitServicesOff;
     /** The dominator tree over super-source, units and station nodes (shared with {@link RiskTables}). */
     private final Dominators dom;
+    /** Units fed straight in by a station: isolating them stops the station by its valves (per-case counts). */
+    private final java.util.Map<Integer, Isolation.Counts> stationFed = new java.util.HashMap<>();
 
     private OutageTables(ValveSegments segs, Progress progress, boolean localPairs) {
         this.segs = segs;
@@ -115,6 +117,56 @@ public final class OutageTables {
             valveServicesOff[v] = loss.services;
             valveMetersOff[v] = loss.meters;
         }
+        stationFedCases(sg);
+    }
+
+    /**
+     * The cases the dominator tree does not answer. Isolating a unit that an in-service
+     * station feeds straight in (outlet in the unit, fed inlet outside it) stops that
+     * station by closing its stop valves ({@link StationStop}), which takes the inlet pipe
+     * between them, and whatever hangs on it, off gas as well: a set of units, not one
+     * node. These units (a few per station), and the failure of each relied-on valve
+     * beside one, are counted by a per-case {@link Isolation}.
+     */
+    private void stationFedCases(SegmentGraph sg) {
+        int nst = segs.state().stationCount();
+        java.util.BitSet fed = new java.util.BitSet(units);
+        for (int st = 0; st < nst; st++) {
+            int l = sg.stationLink(st);
+            if (l < 0 || !sg.isOpen(l)) continue;
+            int a = unitOf[sg.linkA(l)], b = unitOf[sg.linkB(l)];
+            if (a != b && dom.isReachable(1 + a)) fed.set(b);
+        }
+        if (fed.isEmpty()) return;
+        // only the counts are read: they do not depend on the inspection date
+        Isolation iso = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
+        java.util.Map<Integer, java.util.BitSet> unitSegs = new java.util.HashMap<>();
+        for (int s = 0; s < unitOf.length; s++) if (fed.get(unitOf[s])) unitSegs.computeIfAbsent(unitOf[s], k -> new java.util.BitSet()).set(s);
+        for (var e : unitSegs.entrySet()) {
+            int u = e.getKey();
+            Isolation.Counts c = iso.counts(e.getValue());
+            stationFed.put(u, c);
+            unitServicesOff[u] = c.services();
+            for (int s = e.getValue().nextSetBit(0); s >= 0; s = e.getValue().nextSetBit(s + 1)) {
+                segServicesOff[s] = c.services();
+                segMetersOff[s] = c.meters();
+            }
+        }
+        for (int v = 0; v < valveRelied.length; v++) {
+            if (!valveRelied[v] || !(fed.get(valveUnitA[v]) || fed.get(valveUnitB[v]))) continue;
+            java.util.BitSet seed = new java.util.BitSet();
+            int l = sg.valveLink(v);
+            seed.set(sg.linkA(l));
+            seed.set(sg.linkB(l));
+            Isolation.Counts c = iso.counts(seed);
+            valveServicesOff[v] = c.services();
+            valveMetersOff[v] = c.meters();
+        }
+    }
+
+    /** The per-case counts of a unit a station feeds straight in, or null for any other unit. */
+    Isolation.Counts stationFedCounts(int unit) {
+        return stationFed.get(unit);
     }
 
     public static OutageTables build(ValveSegments segs) {

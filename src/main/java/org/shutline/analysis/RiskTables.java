@@ -140,8 +140,10 @@ public final class RiskTables {
             List<String> mains = new ArrayList<>();
             for (int m : segs.mains(seg)) mains.add(s.mainId(m));
             if ((seg & 0xFFF) == 0) progress.checkCancelled();
+            Isolation.Counts fed = tables.stationFedCounts(u);
             rows.add(new SegmentRow(seg, s.graph().systemId(segSystem[seg]), mains, segs.serviceCount(seg), tables.servicesOffWhenIsolated(seg),
-                    tables.metersOffWhenIsolated(seg), dom.isReachable(1 + u) ? subCrit[1 + u] : 0, valveCount[u], !notIsolable[u]));
+                    tables.metersOffWhenIsolated(seg), fed != null ? fed.critical() : dom.isReachable(1 + u) ? subCrit[1 + u] : 0,
+                    fed != null ? fed.valves() : valveCount[u], fed != null ? fed.isolable() : !notIsolable[u]));
         }
         rows.sort(Comparator.comparingLong(SegmentRow::servicesOff).reversed().thenComparingLong(r -> -r.metersOff())
                 .thenComparingInt(SegmentRow::segment));

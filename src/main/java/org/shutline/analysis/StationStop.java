@@ -121,6 +121,43 @@ public final class StationStop {
             for (Isolation.ValveStep step : r.valves()) if (!cut.get(sg.valveLink(step.valve()))) byStation = false;
         }
         if (r == null || !byStation) r = iso.isolate(new Zone.OfSegments(new int[] {inlet}));
+        String note;
+        if (!r.isolable()) {
+            note = "valves alone cannot stop it: " + r.reason();
+        } else if (byStation) {
+            note = "";
+        } else if (own.isEmpty()) {
+            note = "no station valve on record; the smallest stop shuts inlet " + mainsText(inletMains(segs, r.region(), station.inSys()));
+        } else {
+            note = "its station valve" + (own.size() > 1 ? "s" : "") + " " + ids(s, sg, own)
+                    + (own.size() > 1 ? " leave" : " leaves") + " the inlet fed from another side; the smallest stop shuts inlet "
+                    + mainsText(inletMains(segs, r.region(), station.inSys()));
+        }
+        return of(iso, st, r, byStation, note);
+    }
+
+    /**
+     * The stop of {@code stop}'s station when valve {@code v} of it will not close: its
+     * region grown across that valve (and on across inoperable valves), isolated again.
+     * Not done by valves when the grown region holds a source or is fed straight in by
+     * another station: the station is then to be stopped at the station itself.
+     */
+    static Result grownBy(Isolation iso, Result stop, int v) {
+        Isolation.Result r = iso.isolate(new Zone.OfSegments(iso.grownAcross(stop.isolation().region(), v).stream().toArray()));
+        String failed = iso.segments().state().valveId(v);
+        String note = r.isolable()
+                ? "with " + failed + " not closing, the stop grows to inlet " + mainsText(inletMains(iso.segments(), r.region(), stop.inSys()))
+                : "with " + failed + " not closing, valves alone cannot stop it: stop it at the station (" + r.reason() + ")";
+        return of(iso, stop.station(), r, false, note);
+    }
+
+    /** The result for station {@code st} stopped by isolation {@code r}: what else goes off with it. */
+    private static Result of(Isolation iso, int st, Isolation.Result r, boolean byStation, String note) {
+        ValveSegments segs = iso.segments();
+        SegmentGraph sg = segs.graph();
+        NetworkState s = segs.state();
+        Station station = s.network().stations().get(st);
+        BitSet before = iso.fedSegments();
         BitSet offSegs = r.region();
         offSegs.or(r.unintended());
         offSegs.and(before);
@@ -141,17 +178,6 @@ public final class StationStop {
         long otherMeters = 0;
         for (int i = other.nextSetBit(0); i >= 0; i = other.nextSetBit(i + 1)) otherMeters += s.network().services().get(i).meters();
         List<String> inletMains = inletMains(segs, r.region(), station.inSys());
-        String note;
-        if (!r.isolable()) {
-            note = "valves alone cannot stop it: " + r.reason();
-        } else if (byStation) {
-            note = "";
-        } else if (own.isEmpty()) {
-            note = "no station valve on record; the smallest stop shuts inlet " + mainsText(inletMains);
-        } else {
-            note = "its station valve" + (own.size() > 1 ? "s" : "") + " " + ids(s, sg, own)
-                    + (own.size() > 1 ? " leave" : " leaves") + " the inlet fed from another side; the smallest stop shuts inlet " + mainsText(inletMains);
-        }
         return new Result(st, station.id(), station.name(), station.inSys(), r.isolable(), byStation, note, r.valveIds(), r,
                 also, inletMains, ownDistrict, other, otherMeters);
     }

@@ -71,9 +71,17 @@ final class Suggestions {
                     addIds.add(s.network().services().get(i).id());
                     meters += s.network().services().get(i).meters();
                 }
+                BitSet stays = (BitSet) offStep.clone();
+                stays.andNot(r.servicesOff());
+                List<String> stayIds = new ArrayList<>();
+                long stayMeters = 0;
+                for (int i = stays.nextSetBit(0); i >= 0; i = stays.nextSetBit(i + 1)) {
+                    stayIds.add(s.network().services().get(i).id());
+                    stayMeters += s.network().services().get(i).meters();
+                }
                 String why = doubt.why();
                 fallbacks.add(new Isolation.Fallback(s.valveId(v), why, r.isolable(), r.valveIds(), thenClose, addIds, meters,
-                        r.stationsToStop(), r.sourcesInRegion()));
+                        r.stationsToStop(), r.sourcesInRegion(), r.stationStops(), stayIds, stayMeters));
             }
         }
         PlanEvaluation.Suggestion sug = new PlanEvaluation.Suggestion(order, fallbacks);

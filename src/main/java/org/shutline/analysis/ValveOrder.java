@@ -41,7 +41,23 @@ import org.shutline.trace.ValveSegments;
 public final class ValveOrder {
     /** One valve in field order (1 = first); {@code fallback} is null for a valve not in doubt. */
     public record Step(int order, String valveId, int valve, int crew, Operability operable, boolean overdue,
-                       boolean doubtful, boolean stationInlet, double x, double y, Fallback fallback) {}
+                       boolean doubtful, boolean stationInlet, double x, double y, Fallback fallback, List<String> stopsStations) {
+        public Step {
+            stopsStations = List.copyOf(stopsStations);
+        }
+
+        public Step(int order, String valveId, int valve, int crew, Operability operable, boolean overdue,
+                    boolean doubtful, boolean stationInlet, double x, double y, Fallback fallback) {
+            this(order, valveId, valve, crew, operable, overdue, doubtful, stationInlet, x, y, fallback, List.of());
+        }
+
+        /** "stops station ST-N1" for a valve of a station stop (the stations whose stop it is part of); else empty. */
+        public String stopLabel() {
+            if (!stationInlet) return "";
+            return stopsStations.isEmpty() ? "stops a station" : (stopsStations.size() == 1 ? "stops station " : "stops stations ")
+                    + String.join(", ", stopsStations);
+        }
+    }
 
     /**
      * What to do if valve {@code valveId} will not close: the crew closes
@@ -51,7 +67,7 @@ public final class ValveOrder {
      */
     public record Fallback(String valveId, String why, int crew, List<String> thenClose, double extraMinutes,
                            int addedServices, long addedMeters, boolean isolable, String reason, List<String> stopStations,
-                           List<String> stationInletValves) {
+                           List<String> stationInletValves, int stayOnServices, long stayOnMeters) {
         public Fallback {
             thenClose = List.copyOf(thenClose);
             stopStations = List.copyOf(stopStations);
@@ -69,12 +85,10 @@ public final class ValveOrder {
             if (!isolable) {
                 sb.append("valves alone cannot isolate");
                 if (!stopStations.isEmpty()) {
-                    sb.append(": stop station").append(stopStations.size() > 1 ? "s " : " ").append(String.join(", ", stopStations))
-                            .append(" (close ").append(stationInletValves.isEmpty() ? "its inlet valve: none recorded, stop it at the station"
-                                    : String.join(", ", stationInletValves)).append(')');
-                } else if (reason != null && !reason.isBlank()) {
-                    sb.append(": ").append(reason);
+                    sb.append(": stop station").append(stopStations.size() > 1 ? "s " : " ").append(String.join(", ", stopStations));
+                    if (!stationInletValves.isEmpty()) sb.append(" (close ").append(String.join(", ", stationInletValves)).append(')');
                 }
+                if (reason != null && !reason.isBlank()) sb.append(stopStations.isEmpty() ? ": " : "; ").append(reason);
                 if (!thenClose.isEmpty()) sb.append("; crew ").append(crew).append(" also closes ").append(String.join(", ", thenClose));
             } else if (thenClose.isEmpty()) {
                 sb.append("no further valve to close");
@@ -84,6 +98,10 @@ public final class ValveOrder {
             }
             sb.append("; adds ").append(addedServices).append(addedServices == 1 ? " service, " : " services, ")
                     .append(addedMeters).append(addedMeters == 1 ? " meter" : " meters");
+            if (stayOnServices > 0 || stayOnMeters > 0) {
+                sb.append("; ").append(stayOnServices).append(stayOnServices == 1 ? " service, " : " services, ")
+                        .append(stayOnMeters).append(stayOnMeters == 1 ? " meter" : " meters").append(" of the shut-off stay on");
+            }
             return sb.toString();
         }
     }
@@ -164,8 +182,10 @@ public final class ValveOrder {
             if (vs != null) {
                 out.add(new Step(order, id, v, crew, vs.operable(), vs.overdue(), stopOf.get(id).doubtful(), false, xy[0], xy[1], fb));
             } else {
+                List<String> stopsStations = new ArrayList<>();
+                for (StationStop.Result st : r.stationStops()) if (st.valves().contains(id)) stopsStations.add(st.stationId());
                 out.add(new Step(order, id, v, crew, s.valveOperability(v), ValveDoubt.of(s, v, options.doubt()).overdue(), stopOf.get(id).doubtful(), true,
-                        xy[0], xy[1], null));
+                        xy[0], xy[1], fb, stopsStations));
             }
         }
         return new Result(out, route);
@@ -186,25 +206,30 @@ public final class ValveOrder {
         List<String> stations = List.of(), inlet = List.of();
         String reason = "";
         if (!f.isolable()) {
-            Isolation.Result grown = iso.isolate(new Zone.OfSegments(grownSeed(segs, r.region(), v)));
-            stations = named(s, grown.stationsToStop());
-            inlet = grown.stationInletValves();
-            reason = grown.reason() == null ? "" : grown.reason();
+            stations = named(s, f.stationsToStop());
+            List<String> valves = new ArrayList<>();
+            List<String> atStation = new ArrayList<>();
+            for (String id : f.stationsToStop()) {
+                StationStop.Result stop = null;
+                for (StationStop.Result x : f.stationStops()) if (x.stationId().equals(id)) stop = x;
+                if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+                    for (String vid : stop.valves()) if (!valves.contains(vid)) valves.add(vid);
+                } else {
+                    atStation.add(id);
+                }
+            }
+            inlet = valves;
+            List<String> why = new ArrayList<>();
+            if (!f.sourcesInRegion().isEmpty()) {
+                why.add("source " + String.join(", ", f.sourcesInRegion()) + " feeds the area directly: shut the supply");
+            }
+            if (!atStation.isEmpty()) {
+                why.add("no valve on record stops station " + String.join(", ", atStation) + ": stop it at the station");
+            }
+            reason = String.join("; ", why);
         }
         return new Fallback(f.valveId(), f.why(), d.crew(), d.valves(), d.extraMinutes(), f.addedServices().size(), f.addedMeters(),
-                f.isolable(), reason, stations, inlet);
-    }
-
-    /** The region and both sides of valve v: the area if v will not close. */
-    private static int[] grownSeed(ValveSegments segs, BitSet region, int v) {
-        SegmentGraph sg = segs.graph();
-        BitSet seed = (BitSet) region.clone();
-        int l = sg.valveLink(v);
-        if (l >= 0) {
-            seed.set(sg.linkA(l));
-            seed.set(sg.linkB(l));
-        }
-        return seed.stream().toArray();
+                f.isolable(), reason, stations, inlet, f.stayOnServices().size(), f.stayOnMeters());
     }
 
     /** Station ids with their names: "ST-S1 Weir Lane Station". */

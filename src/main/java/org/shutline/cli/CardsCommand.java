@@ -176,7 +176,7 @@ public final class CardsCommand implements Callable<Integer> {
                 rows.add(List.of("  " + v.order() + ". " + v.valveId(), "crew " + v.crew() + "; operable " + v.operable().name().toLowerCase(Locale.ROOT)
                         + (v.overdue() ? ", past inspection interval" : "")
                         + (grid.reference(v.x(), v.y()).isEmpty() ? "" : "; USNG " + grid.reference(v.x(), v.y()))
-                        + (v.stationInlet() ? "; station inlet (stops the station)" : "")));
+                        + (v.stationInlet() ? "; " + v.stopLabel() : "")));
                 if (v.fallback() != null) {
                     rows.add(List.of("     if it will not close", "(" + v.fallback().why() + ") " + v.fallback().text()));
                 }

@@ -45,6 +45,7 @@ final class EmergencyReport {
             o.put("overdue", v.overdue());
             o.put("doubtful", v.doubtful());
             o.put("station_inlet", v.stationInlet());
+            if (v.stationInlet()) o.set("stops_stations", Json.strings(v.stopsStations()));
             o.put("crew", v.crew());
             o.put("x", round(v.x(), 2));
             o.put("y", round(v.y(), 2));
@@ -58,6 +59,8 @@ final class EmergencyReport {
             o.set("valves", Json.strings(a.valves()));
             o.put("adds_services", a.addedServices().size());
             o.put("adds_meters", a.addedMeters());
+            o.put("stays_on_services", a.stayOnServices().size());
+            o.put("stays_on_meters", a.stayOnMeters());
             r.alternativeRoute().ifPresent(rt -> o.put("elapsed_minutes", round(rt.elapsedMinutes(), 1)));
         });
         root.set("valve_time", routeJson(r.route()));
@@ -77,6 +80,8 @@ final class EmergencyReport {
         o.put("extra_minutes", round(f.extraMinutes(), 1));
         o.put("adds_services", f.addedServices());
         o.put("adds_meters", f.addedMeters());
+        o.put("stays_on_services", f.stayOnServices());
+        o.put("stays_on_meters", f.stayOnMeters());
         o.put("isolable", f.isolable());
         if (!f.isolable()) {
             o.put("reason", f.reason());
@@ -92,7 +97,10 @@ final class EmergencyReport {
         o.set("then_close", Json.strings(f.thenClose()));
         o.put("adds_services", f.addedServices().size());
         o.put("adds_meters", f.addedMeters());
+        o.put("stays_on_services", f.stayOnServices().size());
+        o.put("stays_on_meters", f.stayOnMeters());
         o.put("isolable", f.isolable());
+        o.put("text", org.shutline.report.ReportView.fallbackText(f));
     }
 
     static ObjectNode routeJson(ValveRoute.Result r) {
@@ -240,7 +248,7 @@ final class EmergencyReport {
         for (ValveOrder.Step v : r.order().steps()) {
             sb.append(String.format(Locale.ROOT, "  %2d. %-10s crew %d  operable %-7s %s%s%s%n", v.order(), v.valveId(), v.crew(),
                     v.operable().name().toLowerCase(Locale.ROOT), grid.reference(v.x(), v.y()),
-                    v.overdue() ? "  past inspection interval" : "", v.stationInlet() ? "  station inlet (stops the station)" : ""));
+                    v.overdue() ? "  past inspection interval" : "", v.stationInlet() ? "  " + v.stopLabel() : ""));
             if (v.fallback() != null) sb.append("        if it will not close (").append(v.fallback().why()).append("): ")
                     .append(v.fallback().text()).append('\n');
         }

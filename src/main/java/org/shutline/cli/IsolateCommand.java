@@ -141,6 +141,8 @@ public final class IsolateCommand implements Callable<Integer> {
             o.put("adds_services", f.addedServices().size());
             o.put("adds_meters", f.addedMeters());
             o.set("added_service_ids", Json.strings(f.addedServices()));
+            o.put("stays_on_services", f.stayOnServices().size());
+            o.put("stays_on_meters", f.stayOnMeters());
             ValveOrder.Step st = order.step(f.valveId());
             if (st != null && st.fallback() != null) o.put("text", st.fallback().text());
         }
@@ -157,6 +159,8 @@ public final class IsolateCommand implements Callable<Integer> {
             o.set("valves", Json.strings(a.valves()));
             o.put("adds_services", a.addedServices().size());
             o.put("adds_meters", a.addedMeters());
+            o.put("stays_on_services", a.stayOnServices().size());
+            o.put("stays_on_meters", a.stayOnMeters());
         });
         root.set("service_ids_off", Json.strings(r.serviceIdsOff()));
         root.put("caution", Caution.TEXT);
@@ -176,7 +180,7 @@ public final class IsolateCommand implements Callable<Integer> {
         for (ValveOrder.Step v : order.steps()) {
             sb.append(String.format(Locale.ROOT, "  %2d. %-10s crew %d  operable %-7s%s%s%n", v.order(), v.valveId(), v.crew(),
                     v.operable().name().toLowerCase(Locale.ROOT), v.overdue() ? "  past inspection interval" : "",
-                    v.stationInlet() ? "  station inlet (stops the station)" : ""));
+                    v.stationInlet() ? "  " + v.stopLabel() : ""));
             if (v.fallback() != null) sb.append("        if it will not close (").append(v.fallback().why()).append("): ")
                     .append(v.fallback().text()).append('\n');
         }

@@ -294,6 +294,9 @@ public final class PlanCommand implements Callable<Integer> {
                     fo.put("valve", f.valveId());
                     fo.set("then_close", Json.strings(f.thenClose()));
                     fo.put("adds_services", f.addedServices().size());
+                    fo.put("adds_meters", f.addedMeters());
+                    fo.put("stays_on_services", f.stayOnServices().size());
+                    fo.put("text", org.shutline.report.ReportView.fallbackText(f));
                 }
             }
         }

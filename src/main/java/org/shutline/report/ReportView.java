@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.shutline.analysis.GasOffExtent;
 import org.shutline.analysis.IncidentResponse;
+import org.shutline.analysis.StationStop;
 import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ValveDoubt;
@@ -90,8 +91,14 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         if (!f.thenClose().isEmpty()) sb.append(sb.length() == 0 ? "close " : "; and close ").append(String.join(", ", f.thenClose()));
         if (sb.length() == 0) sb.append("no further valve to close");
         int n = f.addedServices().size();
-        return sb.append("; adds ").append(n).append(n == 1 ? " service, " : " services, ").append(f.addedMeters())
-                .append(f.addedMeters() == 1 ? " meter" : " meters").toString();
+        sb.append("; adds ").append(n).append(n == 1 ? " service, " : " services, ").append(f.addedMeters())
+                .append(f.addedMeters() == 1 ? " meter" : " meters");
+        int k = f.stayOnServices().size();
+        if (k > 0 || f.stayOnMeters() > 0) {
+            sb.append("; ").append(k).append(k == 1 ? " service, " : " services, ").append(f.stayOnMeters())
+                    .append(f.stayOnMeters() == 1 ? " meter" : " meters").append(" of the shut-off stay on");
+        }
+        return sb.toString();
     }
 
     public ReportView {
@@ -194,21 +201,25 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
             vs.add(new OperatedValve(v.order(), v.valveId(), xy[0], xy[1], true, state.valveKind(v.valve()), v.operable(),
                     state.valveChecked(v.valve()), v.overdue(), f == null ? List.of() : f.thenClose(), v.crew(),
                     f == null ? "" : f.text()));
-            if (!v.stationInlet()) after = after.withValveClosed(v.valve(), true);
+            after = after.withValveClosed(v.valve(), true);
         }
         List<Hazard> hz = new ArrayList<>();
         List<Station> stations = state.network().stations();
         for (String sid : r.stationsToStop()) {
             for (int i = 0; i < stations.size(); i++) {
                 if (!stations.get(i).id().equals(sid)) continue;
-                after = after.withStationInService(i, false);
+                StationStop.Result stop = null;
+                for (StationStop.Result x0 : r.stationStops()) if (x0.stationId().equals(sid)) stop = x0;
+                boolean byValves = stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable();
+                // stopped as the instruction says: by its stop's valves (closed above with the field order), else at the station
+                if (!byValves) after = after.withStationInService(i, false);
                 Station st = stations.get(i);
                 double sx = st.geometry() == null ? Double.NaN : st.geometry().getX();
                 double sy = st.geometry() == null ? Double.NaN : st.geometry().getY();
                 hz.add(new Hazard("station-feeds-zone", Severity.CRITICAL, 0, List.of(sid), sx, sy,
                         "Valves alone cannot isolate the incident: " + r.reason(),
-                        "Stop station " + sid + (r.stationInletValves().isEmpty() ? "" : " (inlet valves "
-                                + String.join(", ", r.stationInletValves()) + ")") + " and watch its outlet pressure."));
+                        "Stop station " + sid + (byValves ? " (close " + String.join(", ", stop.valves()) + ")" : " at the station (no valve on record stops it)")
+                                + " and watch its outlet pressure."));
             }
         }
         FeedTrace.Result before = FeedTrace.run(state);

@@ -162,7 +162,7 @@ final class IncidentPanel extends JPanel {
         for (ValveOrder.Step v : resp.order().steps()) {
             sb.append(String.format(Locale.ROOT, "  %d. %s  crew %d  (operable: %s%s)%s%n", v.order(), v.valveId(), v.crew(),
                     org.shutline.model.Words.word(v.operable()), v.overdue() ? ", inspection overdue" : "",
-                    v.stationInlet() ? "  station inlet" : ""));
+                    v.stationInlet() ? "  " + v.stopLabel() : ""));
             if (v.fallback() != null) {
                 sb.append("      if it will not close (").append(v.fallback().why()).append("): ").append(v.fallback().text()).append('\n');
             }

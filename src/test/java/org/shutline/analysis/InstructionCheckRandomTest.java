@@ -24,7 +24,9 @@ class InstructionCheckRandomTest {
 
     @Test
     void everyStopIsolationAndShutOffPassesTheReTraceOnRandomNetworks() {
-        int[] seen = new int[4]; // by station valves, inline valve not enough, no station valve, not stoppable by valves
+        // by station valves, inline valve not enough, no station valve, not stoppable by valves,
+        // isolations that stop a station by its valves, fallbacks for a doubtful stop valve
+        int[] seen = new int[6];
         for (long seed = 1; seed <= 150; seed++) {
             checkAll(RandomNets.generate(seed, Set.of()), "RandomNets seed " + seed, seen);
             checkAll(RandomNet.build(seed).topology(), "RandomNet seed " + seed, seen);
@@ -32,6 +34,8 @@ class InstructionCheckRandomTest {
         assertThat(seen[0]).as("stops by the station's own valves").isGreaterThan(20);
         assertThat(seen[1]).as("stations whose station valves alone do not stop them").isGreaterThan(20);
         assertThat(seen[2]).as("stations with no station valve").isGreaterThan(20);
+        assertThat(seen[4]).as("isolations that stop a station by closing its stop valves").isGreaterThan(50);
+        assertThat(seen[5]).as("fallbacks for a doubtful valve of a station stop").isGreaterThan(20);
     }
 
     private static void checkAll(Topology t, String label, int[] seen) {
@@ -57,7 +61,13 @@ class InstructionCheckRandomTest {
             assertThat(FeedTrace.run(closed).servicesFedThrough(st).cardinality()).as(q + " with " + stop.valves() + " closed").isZero();
         }
         for (int seg = 0; seg < segs.segmentCount(); seg++) {
-            check.isolation(iso.isolate(new Zone.OfSegments(new int[] {seg})), label + ", segment " + seg);
+            Isolation.Result r = iso.isolate(new Zone.OfSegments(new int[] {seg}));
+            // the re-trace closes each stop's valves (not the station taken out whole): the inlet pipe between them counts
+            check.isolation(r, label + ", segment " + seg);
+            java.util.Set<String> stopValves = new java.util.HashSet<>();
+            for (StationStop.Result stop : r.stationStops()) if (stop.stoppable()) stopValves.addAll(stop.valves());
+            if (!stopValves.isEmpty()) seen[4]++;
+            for (Isolation.Fallback f : r.fallbacks()) if (stopValves.contains(f.valveId()) && !r.valveIds().contains(f.valveId())) seen[5]++;
         }
         for (int sys = 0; sys < t.graph().systemCount(); sys++) {
             String id = t.graph().systemId(sys);

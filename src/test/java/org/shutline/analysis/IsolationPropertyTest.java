@@ -24,11 +24,9 @@ class IsolationPropertyTest {
         return s;
     }
 
-    /** The state after carrying out an isolation: listed valves closed, named stations stopped. */
+    /** The state after carrying out an isolation: listed valves closed, named stations stopped as it says. */
     private static NetworkState after(NetworkState s, TestNet t, Isolation.Result r) {
-        for (Isolation.ValveStep v : r.valves()) s = s.withValveClosed(v.valve(), true);
-        for (String st : r.stationsToStop()) s = s.withStationInService(t.station(st), false);
-        return s;
+        return Done.isolation(s, r);
     }
 
     @ParameterizedTest
@@ -45,8 +43,10 @@ class IsolationPropertyTest {
             assertThat((long) r.serviceIdsOff().size()).as("seed %d segment %d: table", seed, seg)
                     .isEqualTo(tab.servicesOffWhenIsolated(seg));
             for (Isolation.Fallback f : r.fallbacks()) {
-                // the fallback region is both sides of the failed valve: the valve table's case
-                assertThat((long) r.serviceIdsOff().size() + f.addedServices().size())
+                // a listed valve's fallback region is both sides of the failed valve: the valve table's case
+                // (a station stop's valve grows the stop instead: checked by re-trace in InstructionCheckRandomTest)
+                if (r.valveIds().stream().noneMatch(f.valveId()::equals)) continue;
+                assertThat((long) r.serviceIdsOff().size() + f.addedServices().size() - f.stayOnServices().size())
                         .as("seed %d segment %d fallback %s", seed, seg, f.valveId())
                         .isEqualTo(tab.servicesOffWhenFails(t.valve(f.valveId())));
             }
@@ -121,9 +121,16 @@ class IsolationPropertyTest {
         ValveSegments vs = ValveSegments.build(before.state());
         ValveSegments vs2 = ValveSegments.build(worse.state());
         for (int seg = 0; seg < vs.segmentCount(); seg++) {
-            BitSet a = new Isolation(vs, OPTIONS).isolate(new Zone.OfSegments(new int[] {seg})).servicesOff();
-            BitSet b = new Isolation(vs2, OPTIONS).isolate(new Zone.OfSegments(new int[] {seg})).servicesOff();
-            a.andNot(b);
+            Isolation.Result ra = new Isolation(vs, OPTIONS).isolate(new Zone.OfSegments(new int[] {seg}));
+            Isolation.Result rb = new Isolation(vs2, OPTIONS).isolate(new Zone.OfSegments(new int[] {seg}));
+            assertThat(rb.region()).as("seed %d valve %s segment %d: region", seed, vid, seg).matches(r -> {
+                BitSet x = ra.region();
+                x.andNot(r);
+                return x.isEmpty();
+            });
+            BitSet a = ra.servicesOff();
+            a.andNot(rb.servicesOff());
+            a.andNot(Done.byStopsNotNeeded(ra, rb));
             assertThat(a.isEmpty()).as("seed %d valve %s segment %d: %s", seed, vid, seg, a).isTrue();
         }
     }

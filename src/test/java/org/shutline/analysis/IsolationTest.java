@@ -217,7 +217,11 @@ class IsolationTest {
         assertThat(r.stationInletValves()).containsExactly("V1");
         assertThat(r.reason()).contains("R1").contains("V1");
         assertThat(r.valveIds()).isEmpty();
-        assertThat(r.serviceIdsOff()).containsExactly("s3", "s4");
+        // the instruction stops R1 by closing V1: the inlet pipe between V1 and the station (s2 on ac.1#1) goes off
+        // with the district; s1 lies on the source side of V1 and stays on
+        assertThat(r.serviceIdsOff()).containsExactly("s2", "s3", "s4");
+        FeedTrace.Result closedV1 = FeedTrace.run(t.state().withValveClosed(t.valve("V1"), true));
+        assertThat(t.serviceIds(closedV1.fedServices())).containsExactly("s1");
 
         FeedTrace.Result before = FeedTrace.run(t.state());
         assertThat(t.serviceIds(before.fedServices())).containsExactly("s1", "s2", "s3", "s4");
