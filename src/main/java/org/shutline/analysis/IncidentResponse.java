@@ -40,7 +40,12 @@ public final class IncidentResponse {
      * isolation has an alternative.
      */
     public record Result(Isolation.Result isolation, ValveOrder.Result order, ValveRoute.Result route,
-                         Optional<ValveRoute.Result> alternativeRoute, Restoration.Result restoration, String systemId) {}
+                         Optional<ValveRoute.Result> alternativeRoute, Restoration.Result restoration, String systemId,
+                         List<String> stationsCutOff) {
+        public Result {
+            stationsCutOff = List.copyOf(stationsCutOff);
+        }
+    }
 
     private IncidentResponse() {}
 
@@ -55,7 +60,13 @@ public final class IncidentResponse {
         ValveOrder.Result order = ValveOrder.of(segs, iso, options, r, settings.withCrews(rest.sizing().crews()));
         Optional<ValveRoute.Result> alt = r.alternative()
                 .map(a -> ValveRoute.plan(stops(segs.state(), a.valves()), rest.sizing().crews(), settings.valves()));
-        return new Result(r, order, order.route(), alt, rest, systemOf(segs, zone));
+        List<String> cut = new ArrayList<>();
+        for (int st : iso.stationsCutOff(r)) {
+            var station = segs.state().network().stations().get(st);
+            cut.add(station.id() + (station.name() == null || station.name().isBlank() ? "" : " " + station.name())
+                    + " (feeds " + station.outSys() + ")");
+        }
+        return new Result(r, order, order.route(), alt, rest, systemOf(segs, zone), cut);
     }
 
     /** Valve positions (metres) in the order given; a valve id the state does not hold is a broken contract. */

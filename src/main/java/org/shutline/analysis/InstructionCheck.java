@@ -221,6 +221,35 @@ public final class InstructionCheck {
         }
         sameServices(o.off, ids(r.off()), query, "the over-pressure shut-off of " + r.systemId());
         sameMeters(o.off, r.metersOff(), query, "the over-pressure shut-off of " + r.systemId());
+        Set<String> base = ids(r.off());
+        for (OverpressureShutoff.Feed f : r.feeds()) {
+            if (!f.isStation()) continue;
+            List<Integer> others = new ArrayList<>();
+            for (OverpressureShutoff.Feed g : r.feeds()) {
+                if (g != f && g.isStation()) for (Isolation.ValveStep v : g.upstream().valves()) others.add(v.valve());
+            }
+            for (Isolation.Fallback fb : f.fallbacks()) {
+                String fw = "over-pressure of " + r.systemId() + ", station " + f.id() + ", fallback for " + fb.valveId() + " (valves " + fb.valves() + ")";
+                if (fb.valves().contains(fb.valveId())) throw new UnverifiedInstructionException(query, fw + " closes the valve that failed");
+                Set<String> st = new HashSet<>(stop);
+                st.addAll(fb.stationsToStop());
+                Outcome fo = apply(others, fb.valves(), st, List.of(), shut, query);
+                deadSystem(fo, r.systemId(), query, fw);
+                added(fo, base, fb.addedServices(), fb.stayOnServices(), r.metersOff() + fb.addedMeters() - fb.stayOnMeters(), query, fw);
+            }
+        }
+    }
+
+    private void deadSystem(Outcome o, String systemId, String query, String what) {
+        int sys = state.graph().systemIndex(systemId);
+        if (sys < 0) return;
+        for (int n = 0; n < state.nodeCount(); n++) {
+            int seg = segs.nodeSegment(n);
+            if (seg >= 0 && o.live.get(n) && Restoration.segmentSystem(segs, seg) == sys) {
+                throw new UnverifiedInstructionException(query, what + ": system " + systemId + " still has gas (node at "
+                        + state.nodeX(n) + ", " + state.nodeY(n) + ")");
+            }
+        }
     }
 
     /**

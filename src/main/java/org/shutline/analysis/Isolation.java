@@ -453,7 +453,7 @@ public final class Isolation {
      * The counts of one isolation without its valve lists, fallbacks or ids: services,
      * meters and critical services off, the valves to close, whether valves alone do it.
      */
-    record Counts(long services, long meters, long critical, int valves, boolean isolable) {}
+    record Counts(long services, long meters, long critical, int valves, boolean isolable, List<String> stationsToStop) {}
 
     /** {@link Counts} of isolating {@code seed} (grown across open inoperable valves); same rules as {@link #isolate}. */
     Counts counts(BitSet seed) {
@@ -463,7 +463,26 @@ public final class Isolation {
         BitSet off = c.offServices();
         long crit = 0;
         for (int i = critical.nextSetBit(0); i >= 0; i = critical.nextSetBit(i + 1)) if (off.get(i)) crit++;
-        return new Counts(n, metersOf(c.off), crit, c.listed.size(), c.sources.isEmpty() && c.stations.isEmpty());
+        return new Counts(n, metersOf(c.off), crit, c.listed.size(), c.sources.isEmpty() && c.stations.isEmpty(), stationIds(c.stations));
+    }
+
+    /**
+     * In-service stations an isolation leaves with no gas at the inlet (inlet segment fed
+     * before, off after, station not named to stop): their districts go off with it
+     * unless another station feeds them. Station indices, in index order.
+     */
+    public List<Integer> stationsCutOff(Result r) {
+        BitSet off = r.region();
+        off.or(r.unintended());
+        off.and(before);
+        List<Integer> out = new ArrayList<>();
+        for (int st = 0; st < state.stationCount(); st++) {
+            int l = sg.stationLink(st);
+            if (l < 0 || !sg.isOpen(l) || !off.get(sg.linkA(l))) continue;
+            if (r.stationsToStop().contains(state.stationId(st))) continue;
+            out.add(st);
+        }
+        return out;
     }
 
     private int crossLinks(BitSet set) {

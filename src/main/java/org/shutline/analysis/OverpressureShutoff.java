@@ -43,9 +43,14 @@ public final class OverpressureShutoff {
      * (operating order) and {@code upstream} the stop's isolation (with its fallbacks).
      */
     public record Feed(String kind, String id, String name, String fromSystem, List<String> inletValves,
-                       Isolation.Result upstream, StationStop.Result stop) {
+                       Isolation.Result upstream, StationStop.Result stop, List<Isolation.Fallback> fallbacks) {
         public Feed {
             inletValves = List.copyOf(inletValves);
+            fallbacks = List.copyOf(fallbacks);
+        }
+
+        Feed withFallbacks(List<Isolation.Fallback> f) {
+            return new Feed(kind, id, name, fromSystem, inletValves, upstream, stop, f);
         }
 
         public boolean isStation() {
@@ -97,13 +102,13 @@ public final class OverpressureShutoff {
                 for (String id : up.stationsToStop()) stopped.set(stationIndex(s, id));
                 for (String id : up.sourcesInRegion()) shutSources.set(sourceIndex(net, id));
             }
-            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), stop.valves(), up, stop));
+            feeds.add(new Feed("station", station.id(), station.name(), station.inSys(), stop.valves(), up, stop, List.of()));
         }
         for (int i = 0; i < sg.sourceCount(); i++) {
             int seg = sg.sourceSegment(i);
             if (seg >= 0 && onSystem.get(seg)) {
                 var src = net.sources().get(i);
-                feeds.add(new Feed("source", src.id(), src.id(), src.systemId(), List.of(), null, null));
+                feeds.add(new Feed("source", src.id(), src.id(), src.systemId(), List.of(), null, null, List.of()));
                 shutSources.set(i);
             }
         }
@@ -116,6 +121,9 @@ public final class OverpressureShutoff {
         lost.andNot(after);
         BitSet off = new BitSet(s.serviceCount());
         for (int seg = lost.nextSetBit(0); seg >= 0; seg = lost.nextSetBit(seg + 1)) for (int sv : segs.services(seg)) off.set(sv);
+        for (int i = 0; i < feeds.size(); i++) {
+            if (feeds.get(i).isStation()) feeds.set(i, feeds.get(i).withFallbacks(fallbacks(segs, feeds, i, stopped, shutSources, lost)));
+        }
         List<Service> all = net.services();
         List<String> ordered = new ArrayList<>(), critical = new ArrayList<>(), rest = new ArrayList<>();
         for (int i = atRisk.nextSetBit(0); i >= 0; i = atRisk.nextSetBit(i + 1)) (all.get(i).isCritical() ? critical : rest).add(all.get(i).id());
@@ -124,6 +132,63 @@ public final class OverpressureShutoff {
         Restoration.Result r = Restoration.of(segs, before, after, off, settings);
         return new Result(systemId, feeds, atRisk, ordered, Restoration.meters(all, atRisk), critical, off,
                 Restoration.meters(all, off), r);
+    }
+
+    /**
+     * The whole shut-off's fallback for each doubtful valve of feed {@code i}'s stop: when
+     * the stop's own fallback is done by valves, the feed closes that grown set instead;
+     * otherwise the feed's other stop valves stay closed and the station is stopped at
+     * the station. What it adds, and what of the shut-off it leaves on, are counted
+     * against the whole shut-off (every other feed stopped as planned).
+     */
+    private static List<Isolation.Fallback> fallbacks(ValveSegments segs, List<Feed> feeds, int i, BitSet stopped, BitSet shutSources,
+                                                      BitSet lost) {
+        SegmentGraph sg = segs.graph();
+        NetworkState s = segs.state();
+        Feed feed = feeds.get(i);
+        BitSet others = new BitSet(sg.linkCount());
+        for (int j = 0; j < feeds.size(); j++) {
+            if (j == i || !feeds.get(j).isStation()) continue;
+            for (Isolation.ValveStep v : feeds.get(j).upstream().valves()) others.set(sg.valveLink(v.valve()));
+        }
+        int st = stationIndex(s, feed.id());
+        List<Isolation.Fallback> out = new ArrayList<>();
+        for (Isolation.Fallback f : feed.upstream().fallbacks()) {
+            BitSet closed = (BitSet) others.clone();
+            BitSet stop = (BitSet) stopped.clone();
+            List<String> valves = new ArrayList<>();
+            if (f.isolable()) {
+                valves.addAll(f.valves());
+            } else {
+                for (String id : feed.upstream().valveIds()) if (!id.equals(f.valveId())) valves.add(id);
+                stop.set(st);
+            }
+            for (int v = 0; v < s.valveCount(); v++) if (valves.contains(s.valveId(v)) && sg.valveLink(v) >= 0) closed.set(sg.valveLink(v));
+            BitSet lostF = segs.graph().reachFromSources(null, null);
+            lostF.andNot(reach(sg, closed, stop, shutSources));
+            BitSet add = (BitSet) lostF.clone();
+            add.andNot(lost);
+            BitSet stays = (BitSet) lost.clone();
+            stays.andNot(lostF);
+            List<String> then = new ArrayList<>();
+            for (String id : valves) if (!feed.upstream().valveIds().contains(id)) then.add(id);
+            out.add(new Isolation.Fallback(f.valveId(), f.why(), f.isolable(), valves, then, serviceIds(segs, add), meters(segs, add),
+                    f.isolable() ? List.of() : List.of(feed.id()), List.of(), List.of(), serviceIds(segs, stays), meters(segs, stays)));
+        }
+        return out;
+    }
+
+    private static List<String> serviceIds(ValveSegments segs, BitSet segments) {
+        List<String> out = new ArrayList<>();
+        List<Service> all = segs.state().network().services();
+        for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) for (int sv : segs.services(g)) out.add(all.get(sv).id());
+        return out;
+    }
+
+    private static long meters(ValveSegments segs, BitSet segments) {
+        long m = 0;
+        for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) m += segs.meters(g);
+        return m;
     }
 
     /** Segments reached from the sources not shut, never crossing a closed link nor a stopped station. */

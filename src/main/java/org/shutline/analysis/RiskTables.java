@@ -46,9 +46,10 @@ public final class RiskTables {
 
     /** One valve segment's row. */
     public record SegmentRow(int segment, String systemId, List<String> mains, int services, long servicesOff, long metersOff,
-                             long criticalOff, int valves, boolean isolable) {
+                             long criticalOff, int valves, boolean isolable, List<String> stopStations) {
         public SegmentRow {
             mains = List.copyOf(mains);
+            stopStations = List.copyOf(stopStations);
         }
     }
 
@@ -143,7 +144,8 @@ public final class RiskTables {
             Isolation.Counts fed = tables.stationFedCounts(u);
             rows.add(new SegmentRow(seg, s.graph().systemId(segSystem[seg]), mains, segs.serviceCount(seg), tables.servicesOffWhenIsolated(seg),
                     tables.metersOffWhenIsolated(seg), fed != null ? fed.critical() : dom.isReachable(1 + u) ? subCrit[1 + u] : 0,
-                    fed != null ? fed.valves() : valveCount[u], fed != null ? fed.isolable() : !notIsolable[u]));
+                    fed != null ? fed.valves() : valveCount[u], fed != null ? fed.isolable() : !notIsolable[u],
+                    fed != null ? fed.stationsToStop() : List.of()));
         }
         rows.sort(Comparator.comparingLong(SegmentRow::servicesOff).reversed().thenComparingLong(r -> -r.metersOff())
                 .thenComparingInt(SegmentRow::segment));

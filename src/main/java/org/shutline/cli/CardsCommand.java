@@ -206,7 +206,7 @@ public final class CardsCommand implements Callable<Integer> {
                 if (!f.stop().note().isEmpty()) rows.add(List.of("    note", f.stop().note()));
                 rows.add(List.of("    also", (f.stop().alsoStopped().isEmpty() ? "stops no other station" : "stops " + String.join(", ", f.stop().alsoStopped()))
                         + "; " + Plural.of(f.stop().otherOff().cardinality(), "service") + " off besides the station's own district"));
-                for (Isolation.Fallback x : f.upstream().fallbacks()) {
+                for (Isolation.Fallback x : f.fallbacks()) {
                     rows.add(List.of("    if " + x.valveId() + " will not close", "(" + x.why() + ") " + org.shutline.report.ReportView.fallbackText(x)));
                 }
             }

@@ -68,6 +68,7 @@ final class EmergencyReport {
         root.put("meters_off", iso.metersOff());
         root.set("critical_off", criticalJson(s.network(), r.restoration().criticalShutOff()));
         root.put("unintended_segments", iso.unintended().cardinality());
+        root.set("stations_cut_off", Json.strings(r.stationsCutOff()));
         root.set("closed_boundary_valves", Json.strings(iso.closedBoundaryValves()));
         root.put("initial_isolation_m", IncidentResponse.INITIAL_ISOLATION_M);
     }
@@ -156,7 +157,7 @@ final class EmergencyReport {
                 u.put("isolable", f.upstream().isolable());
                 u.set("valves_to_close", Json.strings(f.upstream().valveIds()));
                 ArrayNode fb = u.putArray("fallbacks");
-                for (Isolation.Fallback x : f.upstream().fallbacks()) fallbackJson(fb.addObject(), x);
+                for (Isolation.Fallback x : f.fallbacks()) fallbackJson(fb.addObject(), x);
                 u.put("services_off", f.upstream().serviceIdsOff().size());
             }
         }
@@ -258,6 +259,10 @@ final class EmergencyReport {
                 .append(r.alternativeRoute().map(rt -> String.format(Locale.ROOT, "; %.0f min", rt.elapsedMinutes())).orElse(""))
                 .append(")\n"));
         routeText(sb, r.route());
+        if (!r.stationsCutOff().isEmpty()) {
+            sb.append("Stations left with no gas at the inlet (their districts go off unless another station feeds them): ")
+                    .append(String.join("; ", r.stationsCutOff())).append('\n');
+        }
         sb.append(String.format(Locale.ROOT, "Services off %d, meters off %d, unintended segments %d%n", iso.serviceIdsOff().size(),
                 iso.metersOff(), iso.unintended().cardinality()));
         criticalText(sb, s.network(), "Critical customers off", r.restoration().criticalShutOff());
@@ -318,9 +323,11 @@ final class EmergencyReport {
             if (!stop.note().isEmpty()) sb.append("    ").append(stop.note()).append('\n');
             sb.append("    this also ").append(stop.alsoStopped().isEmpty() ? "stops no other station"
                     : "stops station " + String.join(", ", stop.alsoStopped()))
-                    .append(" and puts off ").append(Plural.of(stop.otherOff().cardinality(), "service")).append(" besides the station's own district (")
-                    .append(stop.ownDistrict().cardinality()).append(")\n");
-            for (Isolation.Fallback x : f.upstream().fallbacks()) fallbackText(sb, "      ", x);
+                    .append(" and puts off ").append(Plural.of(stop.otherOff().cardinality(), "service"))
+                    .append(stop.ownDistrict().isEmpty() ? " (no district depends on this station alone: another station also feeds it)"
+                            : " besides the station's own district (" + Plural.of(stop.ownDistrict().cardinality(), "service") + ")")
+                    .append('\n');
+            for (Isolation.Fallback x : f.fallbacks()) fallbackText(sb, "      ", x);
         }
         sb.append(String.format(Locale.ROOT, "Services at risk (fed on %s): %d, meters %d; check each for damage before relight%n",
                 r.systemId(), r.atRisk().cardinality(), r.atRiskMeters()));

@@ -39,7 +39,7 @@ import picocli.CommandLine.Spec;
     description = "All-cases outage tables: every segment and station, and the valves to fix first.")
 public final class RiskCommand implements Callable<Integer> {
     static final List<String> SEGMENT_HEADER = List.of("rank", "segment", "system", "mains", "services_in_segment", "services_off",
-            "meters_off", "critical_off", "valves_to_close", "isolable_by_valves");
+            "meters_off", "critical_off", "valves_to_close", "isolable_by_valves", "also_needed");
     static final List<String> STATION_HEADER = List.of("rank", "station", "name", "in_sys", "out_sys", "in_service", "services_off",
             "meters_off", "critical_off", "inlet_valves");
     static final List<String> VALVE_HEADER = List.of("rank", "valve", "system", "operable", "growth_services",
@@ -99,7 +99,8 @@ public final class RiskCommand implements Callable<Integer> {
         for (RiskTables.SegmentRow r : t.segments()) {
             rows.add(List.of(Integer.toString(rank++), Integer.toString(r.segment()), r.systemId(), String.join(" ", r.mains()),
                     Integer.toString(r.services()), Long.toString(r.servicesOff()), Long.toString(r.metersOff()),
-                    Long.toString(r.criticalOff()), Integer.toString(r.valves()), r.isolable() ? "yes" : "no"));
+                    Long.toString(r.criticalOff()), Integer.toString(r.valves()), r.isolable() ? "yes" : "no",
+                    r.isolable() ? "" : stopText(t, r)));
         }
         return rows;
     }
@@ -134,6 +135,7 @@ public final class RiskCommand implements Callable<Integer> {
                 new WriteLayer.Column("critical_off", WriteLayer.ColumnType.INTEGER),
                 new WriteLayer.Column("valves", WriteLayer.ColumnType.INTEGER),
                 new WriteLayer.Column("isolable", WriteLayer.ColumnType.TEXT),
+                new WriteLayer.Column("also_needed", WriteLayer.ColumnType.TEXT),
                 new WriteLayer.Column("rank", WriteLayer.ColumnType.INTEGER));
         List<Geometry> geoms = new ArrayList<>();
         List<List<Object>> rows = new ArrayList<>();
@@ -141,9 +143,21 @@ public final class RiskCommand implements Callable<Integer> {
         for (RiskTables.SegmentRow r : t.segments()) {
             geoms.add(t.segmentGeometry(r.segment()));
             rows.add(List.of(r.segment(), r.systemId(), String.join(" ", r.mains()), r.services(), (int) r.servicesOff(),
-                    (int) r.metersOff(), (int) r.criticalOff(), r.valves(), r.isolable() ? "yes" : "no", rank++));
+                    (int) r.metersOff(), (int) r.criticalOff(), r.valves(), r.isolable() ? "yes" : "no",
+                    r.isolable() ? "" : stopText(t, r), rank++));
         }
         return WriteLayer.of("segments", WriteLayer.GeometryKind.LINE, cols, geoms, rows);
+    }
+
+    /** What besides valves a segment's isolation needs: the stations to stop with their stop valves, or the supply to shut. */
+    static String stopText(RiskTables t, RiskTables.SegmentRow r) {
+        if (r.stopStations().isEmpty()) return "a source feeds it: shut the supply";
+        List<String> parts = new java.util.ArrayList<>();
+        for (String id : r.stopStations()) {
+            RiskTables.StationRow st = t.stations().stream().filter(x -> x.stationId().equals(id)).findFirst().orElse(null);
+            parts.add("stop " + id + (st == null || st.inletValves().isEmpty() ? " at the station" : " (close " + String.join(", ", st.inletValves()) + ")"));
+        }
+        return String.join("; ", parts);
     }
 
     private static String summary(Network net, ValveSegments segs, RiskTables t) {
@@ -156,7 +170,7 @@ public final class RiskCommand implements Callable<Integer> {
             String mains = r.mains().size() <= 4 ? String.join(" ", r.mains())
                     : String.join(" ", r.mains().subList(0, 4)) + " and " + (r.mains().size() - 4) + " more mains";
             sb.append(String.format(Locale.ROOT, "  segment %-5d %-9s %5d services %5d meters %2d valves%s  %s%n", r.segment(), r.systemId(),
-                    r.servicesOff(), r.metersOff(), r.valves(), r.isolable() ? "" : " (not by valves alone)", mains));
+                    r.servicesOff(), r.metersOff(), r.valves(), r.isolable() ? "" : " (not by valves alone: " + stopText(t, r) + ")", mains));
         }
         sb.append("Station outages:\n");
         for (RiskTables.StationRow r : t.stations()) {

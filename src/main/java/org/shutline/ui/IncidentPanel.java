@@ -171,6 +171,9 @@ final class IncidentPanel extends JPanel {
             sb.append("Stations to stop: ").append(String.join(", ", r.stationsToStop()))
                     .append("; their inlet valves: ").append(String.join(", ", r.stationInletValves())).append('\n');
         }
+        if (!resp.stationsCutOff().isEmpty()) {
+            sb.append("Stations left with no gas at the inlet: ").append(String.join("; ", resp.stationsCutOff())).append('\n');
+        }
         sb.append(String.format(Locale.ROOT, "Services off: %d, meters off: %d%n", r.serviceIdsOff().size(), r.metersOff()));
         sb.append("Critical customers off: ").append(r.criticalOff().isEmpty() ? "none" : String.join(", ", r.criticalOff())).append('\n');
         ResponseSizing.Result z = resp.restoration().sizing();

@@ -26,7 +26,7 @@ class InstructionCheckRandomTest {
     void everyStopIsolationAndShutOffPassesTheReTraceOnRandomNetworks() {
         // by station valves, inline valve not enough, no station valve, not stoppable by valves,
         // isolations that stop a station by its valves, fallbacks for a doubtful stop valve
-        int[] seen = new int[6];
+        int[] seen = new int[7];
         for (long seed = 1; seed <= 150; seed++) {
             checkAll(RandomNets.generate(seed, Set.of()), "RandomNets seed " + seed, seen);
             checkAll(RandomNet.build(seed).topology(), "RandomNet seed " + seed, seen);
@@ -36,6 +36,7 @@ class InstructionCheckRandomTest {
         assertThat(seen[2]).as("stations with no station valve").isGreaterThan(20);
         assertThat(seen[4]).as("isolations that stop a station by closing its stop valves").isGreaterThan(50);
         assertThat(seen[5]).as("fallbacks for a doubtful valve of a station stop").isGreaterThan(20);
+        assertThat(seen[6]).as("over-pressure fallbacks, re-traced against the whole shut-off").isGreaterThan(20);
     }
 
     private static void checkAll(Topology t, String label, int[] seen) {
@@ -71,7 +72,9 @@ class InstructionCheckRandomTest {
         }
         for (int sys = 0; sys < t.graph().systemCount(); sys++) {
             String id = t.graph().systemId(sys);
-            check.overpressure(OverpressureShutoff.of(segs, OPTIONS, id, ResponseSettings.DEFAULT), label + ", over-pressure of " + id);
+            OverpressureShutoff.Result op = OverpressureShutoff.of(segs, OPTIONS, id, ResponseSettings.DEFAULT);
+            check.overpressure(op, label + ", over-pressure of " + id);
+            for (OverpressureShutoff.Feed f : op.feeds()) seen[6] += f.fallbacks().size();
         }
     }
 

@@ -92,6 +92,64 @@ class EmergencyCommandsTest {
     }
 
     @Test
+    void aLeakThatMustStopAStationGivesAFallbackForItsDoubtfulStopValve() throws Exception {
+        // on the LP-SOUTH stub next to ST-S1: the station feeds the zone straight in, so it is stopped by closing its
+        // stop valves V-013 and V-004 (V-004: operability unknown in sample-gis/README.md); if V-004 will not close the
+        // stop grows to V-005 (SampleTown: the next valve east on IP-1)
+        CommandsTest.Run r = run("incident", NET, "--at", "512503,4890590", "--as-of", "2026-12-01", "--format", "json");
+        CommandsTest.assertSampleRunDone(r);
+        JsonNode j = JSON.readTree(r.out());
+        JsonNode v004 = null;
+        for (JsonNode v : j.get("valves_to_close")) if (v.get("valve").asText().equals("V-004")) v004 = v;
+        assertThat(v004).isNotNull();
+        assertThat(v004.get("station_inlet").asBoolean()).isTrue();
+        assertThat(texts(v004.get("stops_stations"))).containsExactly("ST-S1");
+        assertThat(v004.get("if_it_will_not_close").asText()).contains("stop station ST-S1 Weir Lane Station (close V-013, V-005)")
+                .contains("adds 0 services, 0 meters");
+        // re-trace by the trace command: the fallback's stop (V-013 and V-005 closed, V-004 left open) leaves ST-S1
+        // feeding nothing and puts off what the shut-off says (513 services, 653 meters: the GDAL-checked district)
+        CommandsTest.Run t = run("trace", NET, "--close", "V-013,V-005", "--format", "json");
+        JsonNode tj = JSON.readTree(t.out());
+        for (JsonNode st : tj.get("stations")) {
+            if (st.get("station_id").asText().equals("ST-S1")) assertThat(st.get("services_fed").asInt()).isZero();
+        }
+        assertThat(tj.get("services_off").asLong()).isEqualTo(j.get("services_off").asLong()).isEqualTo(513);
+    }
+
+    @Test
+    void aLeakOnTheInletMainNamesTheStationItCutsOff() throws Exception {
+        // M-IP-007 between V-013 and V-004 is ST-S1's only inlet (sample-gis/README.md): the leak isolation leaves the
+        // station with no gas, and with it the whole of LP-SOUTH
+        CommandsTest.Run r = run("incident", NET, "--at", "512520,4890597", "--system", "IP-1", "--as-of", "2026-12-01", "--format", "json");
+        JsonNode j = JSON.readTree(r.out());
+        assertThat(texts(j.get("stations_cut_off"))).containsExactly("ST-S1 Weir Lane Station (feeds LP-SOUTH)");
+        CommandsTest.Run text = run("incident", NET, "--at", "512520,4890597", "--system", "IP-1", "--as-of", "2026-12-01");
+        assertThat(text.out()).contains("Stations left with no gas at the inlet (their districts go off unless another station feeds them): "
+                + "ST-S1 Weir Lane Station (feeds LP-SOUTH)");
+    }
+
+    @Test
+    void overPressureFallbacksCountAgainstTheWholeShutOff() throws Exception {
+        // LP-NORTH is fed by ST-N1 (stop V-011, V-013) and ST-N2 (stop V-012, never checked). If V-012 will not close,
+        // ST-N2's stop grows to V-010 and V-005; with V-013 closed for ST-N1 at the same time that also cuts ST-S1's
+        // inlet, so the whole shut-off puts LP-SOUTH off too. Re-traced with the trace command below.
+        CommandsTest.Run r = run("incident", NET, "--at", "512613,4890915", "--kind", "overpressure", "--as-of", "2026-12-01", "--format", "json");
+        JsonNode j = JSON.readTree(r.out());
+        JsonNode n2 = null;
+        for (JsonNode f : j.get("feeds")) if (f.get("id").asText().equals("ST-N2")) n2 = f;
+        JsonNode fb = n2.get("stop").get("fallbacks").get(0);
+        assertThat(fb.get("valve").asText()).isEqualTo("V-012");
+        assertThat(texts(fb.get("then_close"))).containsExactly("V-010", "V-005");
+        CommandsTest.Run whole = run("trace", NET, "--close", "V-011,V-013,V-012", "--format", "json");
+        CommandsTest.Run failed = run("trace", NET, "--close", "V-011,V-013,V-010,V-005", "--format", "json");
+        long base = JSON.readTree(whole.out()).get("services_off").asLong();
+        long withFallback = JSON.readTree(failed.out()).get("services_off").asLong();
+        assertThat(j.get("services_off").asLong()).isEqualTo(base).isEqualTo(710);
+        assertThat(fb.get("adds_services").asLong()).isEqualTo(withFallback - base).isEqualTo(513);
+        assertThat(fb.get("text").asText()).isEqualTo("close V-010, V-005; adds 513 services, 653 meters");
+    }
+
+    @Test
     void leakOnTheIntermediatePressureMainInJson() throws Exception {
         CommandsTest.Run r = run("incident", NET, "--at", "512547,4890597", "--system", "IP-1", "--as-of", "2026-12-01",
                 "--crews", "1", "--format", "json");
