@@ -120,10 +120,15 @@ public final class OverpressureLimit {
         return String.format(Locale.ROOT, "%.1f in w.c.", p.inchesWaterColumn());
     }
 
-    /** As {@link #format(Pressure)}, followed by the figure in {@code unit} when that is another unit. */
+    /**
+     * As {@link #format(Pressure)}, followed by the figure in {@code unit} when that is
+     * another unit (kPa, or psi below 1 psig); never in inches of water column for a
+     * pressure of 1 psig or more.
+     */
     public static String format(Pressure p, PressureUnit unit) {
         String us = format(p);
-        boolean same = (unit == PressureUnit.PSI && p.compareTo(ONE_PSI) >= 0) || (unit == PressureUnit.IN_WC && p.compareTo(ONE_PSI) < 0);
+        // inches of water column are for low pressures only: a figure of 1 psig or more is not repeated in them
+        boolean same = (unit == PressureUnit.PSI && p.compareTo(ONE_PSI) >= 0) || unit == PressureUnit.IN_WC;
         return unit == null || same ? us : us + " (" + p.format(unit) + ")";
     }
 }

@@ -299,7 +299,7 @@ public final class MapSheet implements Sheet {
         double y = r.getY() + 4;
         double width = r.getWidth() - 10;
         y = lines(g, font(Font.BOLD, 10), title.project(), x, y, width, 2);
-        if (!title.phase().isEmpty()) y = lines(g, font(Font.PLAIN, 8), "Phase: " + title.phase(), x, y, width, 2);
+        if (!title.phase().isEmpty()) y = lines(g, font(Font.PLAIN, 8), (title.phase().startsWith("Phase ") ? "" : "Phase: ") + title.phase(), x, y, width, 2);
         y = lines(g, font(Font.BOLD, 8.5f), title.subject(), x, y, width, 3);
         Font small = font(Font.PLAIN, 7);
         String made = "Prepared " + WHEN.format(title.made()) + (title.preparedBy().isEmpty() ? "" : " by " + title.preparedBy());

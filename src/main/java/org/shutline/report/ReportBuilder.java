@@ -146,11 +146,19 @@ public final class ReportBuilder {
         this.streets = new StreetLocator(network.context(), network.crs().unit(),
                 network.mains().stream().map(org.shutline.model.Main::geometry).toList());
         this.title = new TitleInfo(plan != null ? plan.states().plan().project() : projectWithoutPlan(view, network),
-                view.phase(), view.subject(), options.made(), options.preparedBy(),
+                view.kind() == ReportView.Kind.STEP && !view.phase().isEmpty() && plan != null
+                        ? "Phase " + phaseNumber(plan, view) + ": " + view.phase() : view.phase(),
+                view.subject(), options.made(), options.preparedBy(),
                 networkFile == null ? network.sourceName() : String.valueOf(networkFile.getFileName()), modified(networkFile));
         MapSheet.Layout lay = MapSheet.layout(options.page().widthPt(), options.page().heightPt());
         this.book = MapBook.plan(view.gasOff(), area(), lay.frame().getWidth(), lay.frame().getHeight(),
                 network.crs().unit(), options.maxBookSheets());
+    }
+
+    /** The 1-based number of the phase of the view's step, as the command line numbers phases. */
+    private static int phaseNumber(PlanEvaluation.Result plan, ReportView view) {
+        for (var st : plan.states().steps()) if (st.step().number() == view.step()) return st.step().phase() + 1;
+        return 0;
     }
 
     private static String projectWithoutPlan(ReportView v, Network n) {

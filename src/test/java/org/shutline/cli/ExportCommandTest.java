@@ -145,7 +145,7 @@ class ExportCommandTest {
             assertThat(doc.getPage(0).getMediaBox().getHeight()).isCloseTo(841.89f, org.assertj.core.data.Offset.offset(0.01f));
             String page1 = oneLine(text(doc, 1, 1));
             assertThat(page1).contains("Elder Street cast-iron renewal (Tallowmere)")
-                    .contains("Phase: 1 West tie-in at Tannery Lane").contains("Step 1: close V-TAN-N, V-TAN-S, V-ELD-W, V-CI-W")
+                    .contains("Phase 1: West tie-in at Tannery Lane").contains("Step 1: close V-TAN-N, V-TAN-S, V-ELD-W, V-CI-W")
                     .contains("Valve to close");
             for (int i = 0; i < STEP1.size(); i++) assertThat(page1).contains((i + 1) + ". close " + STEP1.get(i));
             String all = text(doc, 1, doc.getNumberOfPages());
@@ -250,7 +250,7 @@ class ExportCommandTest {
         assertThat(st.keySet()).doesNotContain("isolation_circle");
         String valves = exec(null, "ogrinfo", "-al", "-q", step.resolve("results.gpkg").toString(), "valves_to_operate");
         assertThat(valves).contains("valve_id (String) = V-ELD-W").contains("step (Integer) = 1")
-                .contains("phase (String) = 1 West tie-in at Tannery Lane").contains("action (String) = close");
+                .contains("phase (String) = West tie-in at Tannery Lane").contains("action (String) = close");
     }
 
     @Test
