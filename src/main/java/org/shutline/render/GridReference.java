@@ -127,12 +127,29 @@ public record GridReference(int zone, char band, char column, char row, int east
         try {
             if (!MGRS.isMGRS(t)) throw new ParseException(t, 0);
             MGRS m = MGRS.parse(t);
+            String columns = COLUMN_SETS[m.getZone() % 3];
+            if (columns.indexOf(m.getColumn()) < 0) {
+                throw new IllegalArgumentException("not a US National Grid reference: \"" + text + "\": column letter " + m.getColumn()
+                        + " is not used in zone " + m.getZone() + " (its 100 km columns are " + columns.charAt(0) + " to "
+                        + columns.charAt(columns.length() - 1) + ")");
+            }
             return new GridReference(m.getZone(), m.getBand(), m.getColumn(), m.getRow(),
                     (int) m.getEasting(), (int) m.getNorthing());
+        } catch (IllegalArgumentException e) {
+            if (e.getMessage() != null && e.getMessage().startsWith("not a US National Grid reference")) throw e;
+            throw new IllegalArgumentException("not a US National Grid reference: \"" + text + "\"", e);
         } catch (ParseException | RuntimeException e) {
             throw new IllegalArgumentException("not a US National Grid reference: \"" + text + "\"", e);
         }
     }
+
+    /**
+     * 100 km column letters by zone number mod 3 (zone 3, 6, ... use S to Z; 1, 4, ... A
+     * to H; 2, 5, ... J to R; I and O are never used), as GeographicLib's GeoConvert
+     * checks them ("Column letter A not in zone 15 set STUVWXYZ"); the tests compare
+     * every zone and letter with it.
+     */
+    private static final String[] COLUMN_SETS = {"STUVWXYZ", "ABCDEFGH", "JKLMNPQR"};
 
     /**
      * The side in metres of the cell a typed reference names: 100 000 for a 100 km square

@@ -97,4 +97,43 @@ class GridReferenceTest {
         assertThatThrownBy(() -> Precision.ofDigits(6)).isInstanceOf(IllegalArgumentException.class);
         assertThat(Precision.ofDigits(3)).isEqualTo(Precision.M100);
     }
+
+    @Test
+    void columnLettersAreThoseOfTheZoneAsGeoConvertChecksThem() throws Exception {
+        Assumptions.assumeTrue(ExternalTool.exists(GEOCONVERT), "GeoConvert not installed: skipped");
+        // every zone 1..60 with every column letter A..Z but I and O, in band N with row letter A; GeographicLib's
+        // GeoConvert -u rejects a column letter outside the zone's set with "Column letter X not in zone"; any other
+        // answer (a position, or a block outside the band) means the column letter itself is good
+        StringBuilder in = new StringBuilder();
+        List<String> refs = new java.util.ArrayList<>();
+        for (int zone = 1; zone <= 60; zone++) {
+            for (char c = 'A'; c <= 'Z'; c++) {
+                if (c == 'I' || c == 'O') continue;
+                String ref = zone + "N" + c + "A" + "0000000000";
+                refs.add(ref);
+                in.append(ref).append('\n');
+            }
+        }
+        Process p = new ProcessBuilder(GEOCONVERT, "-u").redirectErrorStream(true).start();
+        try (var os = p.getOutputStream()) {
+            os.write(in.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        }
+        List<String> lines = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8).lines().toList();
+        p.waitFor();
+        assertThat(lines).hasSize(refs.size());
+        int refused = 0;
+        for (int i = 0; i < refs.size(); i++) {
+            String ref = refs.get(i);
+            boolean badColumn = lines.get(i).contains("Column letter");
+            if (badColumn) {
+                refused++;
+                assertThatThrownBy(() -> GridReference.parse(ref)).as(ref + ": " + lines.get(i)).isInstanceOf(IllegalArgumentException.class)
+                        .hasMessageContaining("column letter");
+            } else {
+                assertThat(GridReference.parse(ref).squareId()).as(ref + ": " + lines.get(i)).startsWith(ref.substring(ref.indexOf('N') + 1, ref.indexOf('N') + 2));
+            }
+        }
+        // 24 letters, 8 of them in each zone's set
+        assertThat(refused).isEqualTo(60 * 16);
+    }
 }
