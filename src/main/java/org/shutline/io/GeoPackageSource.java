@@ -50,16 +50,101 @@ final class GeoPackageSource {
 
     private GeoPackageSource() {}
 
+    /** Rows per chunk above which a table is read in several key ranges at once. */
+    static final int CHUNK_ROWS = 200_000;
+
     static List<RawLayer> read(Path file) throws InputException {
+        return read(file, Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors())), CHUNK_ROWS);
+    }
+
+    /**
+     * Reads with {@code threads} reader threads, each on its own read-only connection:
+     * the tables, and the key ranges of a table spanning more than {@code chunkRows} keys,
+     * are read at the same time and put back together in table and key order, so the
+     * result is the same as one sequential pass.
+     */
+    static List<RawLayer> read(Path file, int threads, int chunkRows) throws InputException {
         checkMagic(file);
+        List<Table> tables = new ArrayList<>();
         try (Connection c = open(file)) {
-            List<String> tables = featureTables(c, file);
-            List<RawLayer> out = new ArrayList<>(tables.size());
-            Map<String, String> words = new HashMap<>();
-            for (String t : tables) out.add(layer(c, t, file, words));
-            return out;
+            for (String t : featureTables(c, file)) tables.add(table(c, t, file));
         } catch (SQLException e) {
             throw new InputException(file + ": cannot read GeoPackage: " + e.getMessage(), e);
+        }
+        Map<String, String> words = new java.util.concurrent.ConcurrentHashMap<>();
+        List<Chunk> chunks = new ArrayList<>();
+        for (Table t : tables) {
+            long span = t.maxKey - t.minKey + 1;
+            int parts = threads <= 1 || t.pk == null || span <= chunkRows ? 1 : (int) Math.min(64, (span + chunkRows - 1) / chunkRows);
+            for (int i = 0; i < parts; i++) {
+                long lo = parts == 1 ? Long.MIN_VALUE : t.minKey + span * i / parts;
+                long hi = parts == 1 ? Long.MAX_VALUE : i == parts - 1 ? Long.MAX_VALUE : t.minKey + span * (i + 1) / parts;
+                chunks.add(new Chunk(t, lo, hi));
+            }
+        }
+        // biggest first, so the threads finish together
+        List<Chunk> byCost = new ArrayList<>(chunks);
+        byCost.sort(java.util.Comparator.comparingLong((Chunk ch) -> ch.estimate()).reversed());
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
+            Thread th = new Thread(r, "gpkg-reader");
+            th.setDaemon(true);
+            return th;
+        });
+        ThreadLocal<Connection> conn = new ThreadLocal<>();
+        List<Connection> opened = java.util.Collections.synchronizedList(new ArrayList<>());
+        Map<Chunk, java.util.concurrent.Future<List<RawLayer.Feature>>> futures = new HashMap<>();
+        try {
+            for (Chunk ch : byCost) {
+                futures.put(ch, pool.submit(() -> {
+                    Connection c = conn.get();
+                    if (c == null) {
+                        c = open(file);
+                        opened.add(c);
+                        conn.set(c);
+                    }
+                    return ch.table.features(c, ch.lo, ch.hi, words);
+                }));
+            }
+            List<RawLayer> out = new ArrayList<>(tables.size());
+            for (Table t : tables) {
+                List<RawLayer.Feature> fs = null;
+                for (Chunk ch : chunks) {
+                    if (ch.table != t) continue;
+                    List<RawLayer.Feature> part = futures.get(ch).get();
+                    if (fs == null) fs = part;
+                    else fs.addAll(part);
+                }
+                out.add(new RawLayer(t.name, t.where, false, t.names, fs == null ? new ArrayList<>() : fs, t.crs));
+            }
+            return out;
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof InputException ie) throw ie;
+            if (cause instanceof SQLException se) throw new InputException(file + ": cannot read GeoPackage: " + se.getMessage(), se);
+            if (cause instanceof RuntimeException re) throw re;
+            if (cause instanceof Error er) throw er;
+            throw new IllegalStateException(cause);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InputException(file + ": reading interrupted", e);
+        } finally {
+            pool.shutdownNow();
+            for (Connection c : opened) {
+                try {
+                    c.close();
+                } catch (SQLException ignored) {
+                    // read-only connection: nothing to lose on close
+                }
+            }
+        }
+    }
+
+    /** One key range of one table ({@code lo} inclusive, {@code hi} exclusive). */
+    private record Chunk(Table table, long lo, long hi) {
+        long estimate() {
+            long a = lo == Long.MIN_VALUE ? table.minKey : lo;
+            long b = hi == Long.MAX_VALUE ? table.maxKey + 1 : hi;
+            return Math.max(1, b - a) * (table.names.size() + 2);
         }
     }
 
@@ -124,8 +209,68 @@ final class GeoPackageSource {
         };
     }
 
-    private static RawLayer layer(Connection c, String table, Path file, Map<String, String> words)
-            throws InputException, SQLException {
+    /** A feature table's metadata: key, geometry and field columns, CRS, key range. */
+    private static final class Table {
+        final String name, where, pk, geomColumn;
+        final List<String> names;
+        final Kind[] kinds;
+        final CrsInfo crs;
+        final long minKey, maxKey;
+
+        Table(String name, String where, String pk, String geomColumn, List<String> names, Kind[] kinds, CrsInfo crs, long minKey, long maxKey) {
+            this.name = name;
+            this.where = where;
+            this.pk = pk;
+            this.geomColumn = geomColumn;
+            this.names = names;
+            this.kinds = kinds;
+            this.crs = crs;
+            this.minKey = minKey;
+            this.maxKey = maxKey;
+        }
+
+        /** The features with key in [lo, hi), in key order. */
+        List<RawLayer.Feature> features(Connection c, long lo, long hi, Map<String, String> words) throws SQLException {
+            String key = pk == null ? "rowid" : quote(pk);
+            StringBuilder sql = new StringBuilder("SELECT ").append(key).append(", ").append(quote(geomColumn));
+            for (String n : names) sql.append(", ").append(quote(n));
+            sql.append(" FROM ").append(quote(name));
+            boolean ranged = lo != Long.MIN_VALUE || hi != Long.MAX_VALUE;
+            if (ranged) sql.append(" WHERE ").append(key).append(" >= ? AND ").append(key).append(" < ?");
+            sql.append(" ORDER BY 1");
+            GpkgGeometry geom = new GpkgGeometry();
+            List<RawLayer.Feature> fs = new ArrayList<>();
+            int nv = names.size();
+            Interner[] intern = new Interner[nv];
+            for (int i = 0; i < nv; i++) intern[i] = new Interner(words);
+            try (PreparedStatement s = c.prepareStatement(sql.toString())) {
+                if (ranged) {
+                    s.setLong(1, lo);
+                    s.setLong(2, hi);
+                }
+                try (ResultSet r = s.executeQuery()) {
+                    while (r.next()) {
+                        long fid = r.getLong(1);
+                        Object[] vals = new Object[nv];
+                        for (int i = 0; i < nv; i++) vals[i] = value(r, i + 3, kinds[i], intern[i]);
+                        byte[] blob = r.getBytes(2);
+                        RawLayer.Feature f;
+                        if (blob == null) {
+                            f = new RawLayer.Feature(fid, null, null, Arrays.asList(vals));
+                        } else {
+                            GpkgGeometry.Result g = geom.decode(blob);
+                            f = new RawLayer.Feature(fid, g.geometry(), g.error() == null ? null
+                                    : "geometry (field " + geomColumn + ") not readable: " + g.error(), Arrays.asList(vals));
+                        }
+                        fs.add(f);
+                    }
+                }
+            }
+            return fs;
+        }
+    }
+
+    private static Table table(Connection c, String table, Path file) throws InputException, SQLException {
         String where = file + " layer " + table;
         String geomColumn = null;
         long srsId = Long.MIN_VALUE;
@@ -143,6 +288,7 @@ final class GeoPackageSource {
             throw new InputException(where + ": not a readable GeoPackage: feature table without a gpkg_geometry_columns row");
         }
         String pk = null;
+        String pkType = null;
         List<String> names = new ArrayList<>();
         List<Kind> kinds = new ArrayList<>();
         try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("PRAGMA table_info(" + quote(table) + ")")) {
@@ -150,6 +296,7 @@ final class GeoPackageSource {
                 String name = r.getString("name");
                 if (r.getInt("pk") > 0 && pk == null) {
                     pk = name;
+                    pkType = r.getString("type");
                 } else if (!name.equalsIgnoreCase(geomColumn)) {
                     names.add(name);
                     kinds.add(kind(r.getString("type")));
@@ -158,33 +305,20 @@ final class GeoPackageSource {
         }
         if (names.isEmpty() && pk == null) throw new InputException(where + ": table not found");
         CrsInfo crs = crs(c, srsId, where);
-        StringBuilder sql = new StringBuilder("SELECT ").append(pk == null ? "rowid" : quote(pk)).append(", ").append(quote(geomColumn));
-        for (String n : names) sql.append(", ").append(quote(n));
-        sql.append(" FROM ").append(quote(table)).append(" ORDER BY 1");
-        GpkgGeometry geom = new GpkgGeometry();
-        List<RawLayer.Feature> fs = new ArrayList<>();
-        int nv = names.size();
-        Kind[] k = kinds.toArray(new Kind[0]);
-        Interner[] intern = new Interner[nv];
-        for (int i = 0; i < nv; i++) intern[i] = new Interner(words);
-        try (PreparedStatement s = c.prepareStatement(sql.toString()); ResultSet r = s.executeQuery()) {
-            while (r.next()) {
-                long fid = r.getLong(1);
-                Object[] vals = new Object[nv];
-                for (int i = 0; i < nv; i++) vals[i] = value(r, i + 3, k[i], intern[i]);
-                byte[] blob = r.getBytes(2);
-                RawLayer.Feature f;
-                if (blob == null) {
-                    f = new RawLayer.Feature(fid, null, null, Arrays.asList(vals));
-                } else {
-                    GpkgGeometry.Result g = geom.decode(blob);
-                    f = new RawLayer.Feature(fid, g.geometry(), g.error() == null ? null
-                            : "geometry (field " + geomColumn + ") not readable: " + g.error(), Arrays.asList(vals));
+        // key ranges only over an INTEGER PRIMARY KEY (the rowid): a range query on it is a b-tree seek
+        boolean rowidKey = pk != null && pkType != null && pkType.trim().equalsIgnoreCase("INTEGER");
+        long min = 0, max = -1;
+        if (rowidKey) {
+            try (Statement s = c.createStatement();
+                 ResultSet r = s.executeQuery("SELECT min(" + quote(pk) + "), max(" + quote(pk) + ") FROM " + quote(table))) {
+                if (r.next() && r.getObject(1) != null) {
+                    min = r.getLong(1);
+                    max = r.getLong(2);
                 }
-                fs.add(f);
             }
         }
-        return new RawLayer(table, where, false, names, fs, crs);
+        return new Table(table, where, pk, geomColumn, names, kinds.toArray(new Kind[0]), crs,
+                rowidKey ? min : 0, rowidKey ? max : -1);
     }
 
     private static Object value(ResultSet r, int col, Kind k, Interner words) throws SQLException {

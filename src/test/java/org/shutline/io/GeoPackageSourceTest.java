@@ -37,8 +37,20 @@ class GeoPackageSourceTest {
 
     private static void sameAsOld(Path gpkg) throws Exception {
         Map<String, String> before = Snapshot.of(gpkg.getParent());
+        List<RawLayer> one = GeoPackageSource.read(gpkg, 1, GeoPackageSource.CHUNK_ROWS);
+        // several reader threads, tables cut into key ranges of 100 rows: put back together in the same order
+        List<RawLayer> ranges = GeoPackageSource.read(gpkg, 3, 100);
+        List<RawLayer> auto = GeoPackageSource.read(gpkg);
+        assertThat(Snapshot.of(gpkg.getParent())).as("nothing written or created beside " + gpkg + " by the parallel reads").isEqualTo(before);
+        sameAsOld(gpkg, one);
+        sameAsOld(gpkg, ranges);
+        sameAsOld(gpkg, auto);
+    }
+
+    private static void sameAsOld(Path gpkg, List<RawLayer> nowRead) throws Exception {
+        Map<String, String> before = Snapshot.of(gpkg.getParent());
         List<RawLayer> old = NgaGeoPackageSource.read(gpkg);
-        List<RawLayer> now = GeoPackageSource.read(gpkg);
+        List<RawLayer> now = nowRead;
         assertThat(Snapshot.of(gpkg.getParent())).as("nothing written or created beside " + gpkg).isEqualTo(before);
         assertThat(now).extracting(RawLayer::name).containsExactlyElementsOf(old.stream().map(RawLayer::name).toList());
         for (int l = 0; l < old.size(); l++) {
