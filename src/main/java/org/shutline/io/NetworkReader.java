@@ -73,32 +73,113 @@ public final class NetworkReader {
                     + (names.isEmpty() ? "none" : String.join(", ", names)));
         }
         CrsResolver crs = new CrsResolver(path.toString());
-        List<Main> mains = mainsOf(LayerDecoder.decode(Schema.MAINS, crs.start(mainsRaw, findings), mapping, findings));
+        RawLayer mainsStarted = crs.start(mainsRaw, findings);
         mainsRaw = null;
+        List<Main> mains;
         List<Valve> valves = List.of();
         List<Station> stations = List.of();
         List<SenseTap> taps = List.of();
         List<Service> services = List.of();
         List<Source> sources = List.of();
+        // the other layers are decoded at the same time, each with its own findings, merged in layer order
+        List<Schema.Layer> kinds = new ArrayList<>();
+        List<java.util.concurrent.Callable<Decoded>> work = new ArrayList<>();
+        kinds.add(Schema.MAINS);
+        work.add(() -> {
+            Findings own = new Findings();
+            return new Decoded(mainsOf(LayerDecoder.decode(Schema.MAINS, mainsStarted, mapping, own)), own);
+        });
         for (Schema.Layer l : Schema.LAYERS) {
             if (l == Schema.MAINS) continue;
             RawLayer raw = take(rest, mapping.layerName(l.name()));
             if (raw == null) continue;
-            List<LayerDecoder.Row> r = LayerDecoder.decode(l, crs.adopt(raw, l.name(), findings), mapping, findings);
-            raw = null;
-            switch (l.name()) {
-                case "valves" -> valves = valves(r);
-                case "stations" -> stations = stations(r);
-                case "sense_taps" -> taps = taps(r);
-                case "services" -> services = services(r);
-                case "sources" -> sources = sources(r);
-                default -> throw new IllegalStateException("no model records for layer " + l.name());
+            Findings adoptFindings = new Findings();
+            RawLayer adopted = crs.adopt(raw, l.name(), adoptFindings);
+            kinds.add(l);
+            work.add(() -> {
+                Findings own = new Findings();
+                own.addAll(adoptFindings.list());
+                List<LayerDecoder.Row> r = LayerDecoder.decode(l, adopted, mapping, own);
+                Object records = switch (l.name()) {
+                    case "valves" -> valves(r);
+                    case "stations" -> stations(r);
+                    case "sense_taps" -> taps(r);
+                    case "services" -> services(r);
+                    case "sources" -> sources(r);
+                    default -> throw new IllegalStateException("no model records for layer " + l.name());
+                };
+                return new Decoded(records, own);
+            });
+        }
+        List<Decoded> decoded = inParallel(work, path);
+        findings.addAll(decoded.get(0).findings().list());
+        mains = cast(decoded.get(0).records());
+        for (int i = 1; i < kinds.size(); i++) {
+            Decoded d = decoded.get(i);
+            findings.addAll(d.findings().list());
+            @SuppressWarnings("unchecked")
+            Object rec = d.records();
+            switch (kinds.get(i).name()) {
+                case "valves" -> valves = cast(rec);
+                case "stations" -> stations = cast(rec);
+                case "sense_taps" -> taps = cast(rec);
+                case "services" -> services = cast(rec);
+                case "sources" -> sources = cast(rec);
+                default -> throw new IllegalStateException("no model records for layer " + kinds.get(i).name());
             }
         }
         List<ContextLayer> context = new ArrayList<>();
         for (RawLayer l : rest) context.add(context(crs.adopt(l, l.name(), findings), findings));
         String name = path.getFileName() == null ? path.toString() : path.getFileName().toString();
         return new Network(name, crs.target(), mains, valves, stations, taps, services, sources, context, findings.list());
+    }
+
+    private record Decoded(Object records, Findings findings) {}
+
+    @SuppressWarnings("unchecked")
+    private static <T> List<T> cast(Object records) {
+        return (List<T>) records;
+    }
+
+    /** Runs the tasks on up to four threads; results in task order; an InputException of a task is thrown as is. */
+    private static <T> List<T> inParallel(List<java.util.concurrent.Callable<T>> tasks, Path path) throws InputException {
+        int threads = Math.max(1, Math.min(Math.min(4, tasks.size()), Runtime.getRuntime().availableProcessors()));
+        if (threads <= 1) {
+            List<T> out = new ArrayList<>();
+            for (var t : tasks) {
+                try {
+                    out.add(t.call());
+                } catch (InputException | RuntimeException e) {
+                    throw e;
+                } catch (Exception e) {
+                    throw new IllegalStateException(e);
+                }
+            }
+            return out;
+        }
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
+            Thread th = new Thread(r, "layer-decoder");
+            th.setDaemon(true);
+            return th;
+        });
+        try {
+            List<java.util.concurrent.Future<T>> fs = new ArrayList<>();
+            for (var t : tasks) fs.add(pool.submit(t));
+            List<T> out = new ArrayList<>();
+            for (var f : fs) out.add(f.get());
+            return out;
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable c = e.getCause();
+            if (c instanceof InputException ie) throw ie;
+            if (c instanceof RuntimeException re) throw re;
+            if (c instanceof Error er) throw er;
+            throw new IllegalStateException(c);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InputException(path + ": reading interrupted", e);
+        } finally {
+            pool.shutdownNow();
+        }
     }
 
     /** Removes and returns the layer with this name (ignoring case), or null. */
