@@ -78,13 +78,16 @@ public final class FieldMapping {
         return tolerances;
     }
 
-    /** Read a mapping file (YAML). */
+    /** Largest mapping file read: 1 MB (a full mapping is a few KB). */
+    public static final long MAX_BYTES = 1L << 20;
+
+    /** Read a mapping file (YAML), at most {@link #MAX_BYTES}, lines at most {@link SmallTextFile#MAX_LINE} characters. */
     public static FieldMapping load(Path file) throws InputException {
         JsonNode root;
         try {
             ObjectMapper yaml = new ObjectMapper(new YAMLFactory());
             yaml.enable(com.fasterxml.jackson.core.JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
-            root = yaml.readTree(Files.readAllBytes(file));
+            root = yaml.readTree(SmallTextFile.read(file, "mapping file", MAX_BYTES));
         } catch (JacksonException e) {
             throw new InputException(file + ": not a readable YAML mapping file: " + e.getOriginalMessage());
         } catch (IOException e) {

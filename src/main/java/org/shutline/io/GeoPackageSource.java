@@ -361,6 +361,8 @@ final class GeoPackageSource {
         private static final int PROBE = 4096;
         private final Map<String, String> table;
         private final Map<String, String> seen = new HashMap<>();
+        /** This column's own words, in front of the shared table: a plain map read without synchronisation. */
+        private final Map<String, String> local = new HashMap<>();
         private int count;
         private boolean on = true;
 
@@ -379,8 +381,12 @@ final class GeoPackageSource {
                     if (!on) return s;
                 }
             }
+            String l = local.get(s);
+            if (l != null) return l;
             String t = table.putIfAbsent(s, s);
-            return t == null ? s : t;
+            String w = t == null ? s : t;
+            if (local.size() < 65_536) local.put(w, w);
+            return w;
         }
     }
 

@@ -66,8 +66,9 @@ final class LayerDecoder {
 
     /** One decoded feature: its geometry and typed values indexed like the schema's fields. */
     record Row(String id, Geometry geometry, List<Object> values) {
+        /** {@code values} must be a list no one else changes (each caller builds a fresh one): wrapped, not copied. */
         Row {
-            values = Collections.unmodifiableList(Arrays.asList(values.toArray()));
+            values = Collections.unmodifiableList(values);
         }
 
         @SuppressWarnings("unchecked")

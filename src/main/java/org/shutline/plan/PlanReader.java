@@ -46,12 +46,15 @@ public final class PlanReader {
         this.fileName = fileName;
     }
 
+    /** Largest plan file read: 8 MB (a plan of thousands of steps is well under 1 MB). */
+    public static final long MAX_BYTES = 8L << 20;
+
     public static Plan read(Path file) throws PlanException {
         String text;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new PlanException(file + ": cannot read plan file: " + e.getMessage(), 0);
+            text = org.shutline.io.SmallTextFile.read(file, "plan file", MAX_BYTES);
+        } catch (org.shutline.io.InputException e) {
+            throw new PlanException(e.getMessage(), 0);
         }
         return parse(text, file.getFileName().toString());
     }
@@ -66,6 +69,11 @@ public final class PlanReader {
         try (Reader r = new StringReader(text)) {
             LoaderOptions opts = new LoaderOptions();
             opts.setAllowDuplicateKeys(false);
+            // a plan uses no aliases and little nesting: refuse alias bombs and deep nests at once
+            opts.setMaxAliasesForCollections(20);
+            opts.setAllowRecursiveKeys(false);
+            opts.setNestingDepthLimit(40);
+            opts.setCodePointLimit((int) Math.min(Integer.MAX_VALUE, MAX_BYTES));
             root = new Yaml(opts).compose(r);
         } catch (MarkedYAMLException e) {
             int line = e.getProblemMark() == null ? 0 : e.getProblemMark().getLine() + 1;
