@@ -1,5 +1,6 @@
 package org.shutline.analysis;
 
+import org.shutline.topology.Csr;
 import java.util.Arrays;
 import org.shutline.model.Progress;
 import org.shutline.trace.SegmentGraph;
@@ -240,10 +241,11 @@ public final class OutageTables {
                 to[c++] = b;
             }
         }
-        int[][] g = Csr.group(Arrays.copyOf(from, c), nodes);
-        int[] succ = new int[c];
-        for (int i = 0; i < c; i++) succ[i] = to[g[1][i]];
-        return new int[][] {g[0], succ};
+        int arcs = c;
+        Csr g = Csr.build(nodes, sink -> {
+            for (int i = 0; i < arcs; i++) sink.add(from[i], to[i]);
+        });
+        return new int[][] {g.start(), g.items()};
     }
 
     public ValveSegments segments() { return segs; }

@@ -3,6 +3,7 @@ package org.shutline.trace;
 import java.util.Arrays;
 import java.util.BitSet;
 import org.shutline.model.Operability;
+import org.shutline.topology.Csr;
 import org.shutline.topology.EdgeKind;
 
 /**
@@ -66,28 +67,16 @@ public final class SegmentGraph {
                     s.stationInService(st));
             linkOperability[l] = (byte) Operability.YES.ordinal();
         }
-        adjStart = new int[segmentCount + 1];
-        for (int l = 0; l < links; l++) {
-            adjStart[linkA[l] + 1]++;
-            if (linkB[l] != linkA[l]) adjStart[linkB[l] + 1]++;
-        }
-        for (int i = 0; i < segmentCount; i++) adjStart[i + 1] += adjStart[i];
-        adjLink = new int[adjStart[segmentCount]];
-        int[] fill = Arrays.copyOf(adjStart, segmentCount);
-        for (int l = 0; l < links; l++) {
-            adjLink[fill[linkA[l]]++] = l;
-            if (linkB[l] != linkA[l]) adjLink[fill[linkB[l]]++] = l;
-        }
-        crossStart = new int[segmentCount + 1];
-        for (int u = 0; u < segmentCount; u++) {
-            int c = 0;
-            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) c++;
-            crossStart[u + 1] = crossStart[u] + c;
-        }
-        crossLink = new int[crossStart[segmentCount]];
-        for (int u = 0, k = 0; u < segmentCount; u++) {
-            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) crossLink[k++] = adjLink[i];
-        }
+        Csr adj = Csr.incidence(segmentCount, linkA, linkB, links);
+        adjStart = adj.start();
+        adjLink = adj.items();
+        Csr cross = Csr.build(segmentCount, sink -> {
+            for (int u = 0; u < segmentCount; u++) {
+                for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) sink.add(u, adjLink[i]);
+            }
+        });
+        crossStart = cross.start();
+        crossLink = cross.items();
         sourceSegment = new int[s.sourceCount()];
         sourceSegments = new BitSet(segmentCount);
         for (int i = 0; i < sourceSegment.length; i++) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.Progress;
+import org.shutline.topology.Csr;
 
 /**
  * The feed trace of {@link FeedTrace#run} computed on the valve-segment graph
@@ -41,7 +42,7 @@ final class StationAttribution {
         SegmentGraph sg = vs.graph();
         int nseg = vs.segmentCount();
         progress.done(1);
-        int[][] edgeCsr = ValveSegments.csr(edgeSegments(vs, s.edgeCount()), nseg);
+        Csr edgeCsr = Csr.group(edgeSegments(vs, s.edgeCount()), nseg);
         int[] segSys = segmentSystems(s, vs, edgeCsr);
         BitSet reachedAll = sg.reachFromSources(null, null);
         BitSet live = new BitSet(s.nodeCount());
@@ -121,11 +122,11 @@ final class StationAttribution {
      * service on it then has that system); -1 for a segment with no pipe (no services);
      * -2 when mixed.
      */
-    private static int[] segmentSystems(NetworkState s, ValveSegments vs, int[][] edgeCsr) {
+    private static int[] segmentSystems(NetworkState s, ValveSegments vs, Csr edgeCsr) {
         int n = vs.segmentCount();
         int[] sys = new int[n];
-        int[] start = edgeCsr[0];
-        int[] list = edgeCsr[1];
+        int[] start = edgeCsr.start();
+        int[] list = edgeCsr.items();
         for (int seg = 0; seg < n; seg++) {
             int v = -1;
             for (int i = start[seg]; i < start[seg + 1]; i++) {
@@ -216,10 +217,10 @@ final class StationAttribution {
         return out;
     }
 
-    private static BitSet edges(int[][] csr, BitSet segs, int m) {
+    private static BitSet edges(Csr csr, BitSet segs, int m) {
         BitSet out = new BitSet(m);
-        int[] start = csr[0];
-        int[] list = csr[1];
+        int[] start = csr.start();
+        int[] list = csr.items();
         for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) {
             for (int i = start[seg]; i < start[seg + 1]; i++) out.set(list[i]);
         }

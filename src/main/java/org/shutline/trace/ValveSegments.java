@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.shutline.model.Progress;
 import org.shutline.model.Service;
+import org.shutline.topology.Csr;
 import org.shutline.topology.EdgeKind;
 
 /**
@@ -42,16 +43,16 @@ public final class ValveSegments {
     private final SegmentGraph graph;
 
     private ValveSegments(NetworkState state, int count, int[] nodeSegment, int[] edgeSegment, int[] serviceSegment,
-                          int[][] mains, int[][] services, long[] meters) {
+                          Csr mains, Csr services, long[] meters) {
         this.state = state;
         this.count = count;
         this.nodeSegment = nodeSegment;
         this.edgeSegment = edgeSegment;
         this.serviceSegment = serviceSegment;
-        this.mainStart = mains[0];
-        this.mainList = mains[1];
-        this.serviceStart = services[0];
-        this.serviceList = services[1];
+        this.mainStart = mains.start();
+        this.mainList = mains.items();
+        this.serviceStart = services.start();
+        this.serviceList = services.items();
         this.meters = meters;
         this.graph = new SegmentGraph(state, this);
     }
@@ -119,41 +120,23 @@ public final class ValveSegments {
             serviceSeg[i] = e < 0 ? -1 : edgeSeg[e];
             if (serviceSeg[i] >= 0) meters[serviceSeg[i]] += services.get(i).meters();
         }
-        int[][] mainsCsr = mainsBySegment(s, edgeSeg, segs);
-        int[][] servicesCsr = csr(serviceSeg, segs);
+        Csr mainsCsr = mainsBySegment(s, edgeSeg, segs);
+        Csr servicesCsr = Csr.group(serviceSeg, segs);
         return new ValveSegments(s, segs, nodeSeg, edgeSeg, serviceSeg, mainsCsr, servicesCsr, meters);
     }
 
-    /** CSR of the distinct mains per segment (a main may span several segments). */
-    private static int[][] mainsBySegment(NetworkState s, int[] edgeSeg, int segs) {
-        int[] start = new int[segs + 1];
+    /** CSR of the distinct mains per segment (a main may span several segments), mains ascending. */
+    private static Csr mainsBySegment(NetworkState s, int[] edgeSeg, int segs) {
         long[] pairs = new long[edgeSeg.length];
         int c = 0;
         for (int e = 0; e < edgeSeg.length; e++) {
             if (edgeSeg[e] >= 0) pairs[c++] = ((long) edgeSeg[e] << 32) | s.edgeFeature(e);
         }
         Arrays.sort(pairs, 0, c);
-        int[] list = new int[c];
-        int k = 0;
-        for (int i = 0; i < c; i++) {
-            if (i > 0 && pairs[i] == pairs[i - 1]) continue;
-            int seg = (int) (pairs[i] >>> 32);
-            list[k++] = (int) pairs[i];
-            start[seg + 1]++;
-        }
-        for (int i = 0; i < segs; i++) start[i + 1] += start[i];
-        return new int[][] {start, Arrays.copyOf(list, k)};
-    }
-
-    /** CSR grouping of items by their group (items with group -1 left out), items in index order. */
-    static int[][] csr(int[] groupOf, int groups) {
-        int[] start = new int[groups + 1];
-        for (int g : groupOf) if (g >= 0) start[g + 1]++;
-        for (int i = 0; i < groups; i++) start[i + 1] += start[i];
-        int[] list = new int[start[groups]];
-        int[] fill = Arrays.copyOf(start, groups);
-        for (int i = 0; i < groupOf.length; i++) if (groupOf[i] >= 0) list[fill[groupOf[i]]++] = i;
-        return new int[][] {start, list};
+        int n = c;
+        return Csr.build(segs, sink -> {
+            for (int i = 0; i < n; i++) if (i == 0 || pairs[i] != pairs[i - 1]) sink.add((int) (pairs[i] >>> 32), (int) pairs[i]);
+        });
     }
 
     public NetworkState state() { return state; }
