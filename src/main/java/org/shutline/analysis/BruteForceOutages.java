@@ -98,7 +98,7 @@ public final class BruteForceOutages {
         BitSet blocked = (BitSet) region.clone();
         for (int st = 0; st < segs.state().stationCount(); st++) {
             int l = sg.stationLink(st);
-            if (l < 0 || !sg.isOpen(l) || !region.get(sg.linkB(l)) || region.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
+            if (!sg.feedsInto(l, region, before)) continue;
             StationStop.Result stop = stops.stationStop(st);
             if (stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
                 blocked.or(stop.isolation().region());

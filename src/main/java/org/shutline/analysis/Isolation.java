@@ -212,7 +212,7 @@ public final class Isolation {
         this.options = options;
         this.doubt = options.doubt();
         this.before = sg.reachFromSources(null, null);
-        this.hops = hopsFromSources();
+        this.hops = sg.hopsFromSources();
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
@@ -423,9 +423,7 @@ public final class Isolation {
         BitSet stopped = new BitSet(state.stationCount());
         BitSet blocked = c.region;
         for (int st = 0; st < state.stationCount(); st++) {
-            int l = sg.stationLink(st);
-            if (l < 0 || !sg.isOpen(l)) continue;
-            if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
+            if (sg.feedsInto(sg.stationLink(st), c.region, before)) {
                 c.stations.add(st);
                 StationStop.Result stop = st == replaced ? replacement : stationStop(st);
                 if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
@@ -563,34 +561,6 @@ public final class Isolation {
             }
         }
         return region;
-    }
-
-    private int[] hopsFromSources() {
-        int n = sg.segmentCount();
-        int[] d = new int[n];
-        java.util.Arrays.fill(d, Integer.MAX_VALUE);
-        int[] queue = new int[Math.max(1, n)];
-        int head = 0, tail = 0;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int s = sg.sourceSegment(i);
-            if (s >= 0 && d[s] != 0) {
-                d[s] = 0;
-                queue[tail++] = s;
-            }
-        }
-        while (head < tail) {
-            int u = queue[head++];
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
-                if (!sg.canFlow(l, u)) continue;
-                int w = sg.other(l, u);
-                if (d[w] == Integer.MAX_VALUE) {
-                    d[w] = d[u] + 1;
-                    queue[tail++] = w;
-                }
-            }
-        }
-        return d;
     }
 
     /** Null when the valve is relied on without doubt; else why it needs a fallback. */

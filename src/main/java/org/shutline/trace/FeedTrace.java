@@ -83,6 +83,8 @@ public final class FeedTrace {
         public boolean isFed(int service) { return fedServices.get(service); }
         public boolean isEdgeLive(int edge) { return liveEdges.get(edge); }
         public boolean isMultiFed(int service) { return multiFed.get(service); }
+        /** Whether station {@code st} of state s passes gas in this trace ({@link Passage#stationPasses}: in service, inlet live). */
+        public boolean stationPasses(NetworkState s, int st) { return Passage.stationPasses(s, st, liveNodes); }
         public boolean isDeadMain(int main) { return deadMains.get(main); }
         public int stationCount() { return stationServices.size(); }
         public BitSet servicesFedThrough(int station) { return (BitSet) stationServices.get(station).clone(); }
@@ -171,7 +173,7 @@ public final class FeedTrace {
         int[] lastStageFeeds = new int[s.serviceCount()];
         for (int st = 0; st < nst; st++) {
             int e = s.stationEdge(st);
-            boolean on = e >= 0 && !s.isRemoved(e) && s.stationInService(st) && live.get(s.edgeFrom(e));
+            boolean on = Passage.stationPasses(s, st, live);
             if (!on) {
                 stServices.add(new BitSet());
                 stExclusive.add(new BitSet());

@@ -64,7 +64,7 @@ final class StationAttribution {
         for (int st = 0; st < nst; st++) {
             progress.checkCancelled();
             int e = s.stationEdge(st);
-            boolean on = e >= 0 && !s.isRemoved(e) && s.stationInService(st) && live.get(s.edgeFrom(e));
+            boolean on = Passage.stationPasses(s, st, live);
             if (!on) {
                 stServices.add(new BitSet());
                 stExclusive.add(new BitSet());

@@ -65,7 +65,7 @@ public final class ValveSegments {
         int n = s.nodeCount(), m = s.edgeCount();
         progress.begin("valve segments", n);
         boolean[] active = new boolean[s.mainCount()];
-        for (int i = 0; i < active.length; i++) active[i] = s.mainActive(i);
+        for (int i = 0; i < active.length; i++) active[i] = Passage.isOpen(s, EdgeKind.PIPE, i); // pipe joins a segment when gas passes it
         boolean[] wanted = new boolean[n];
         for (int e = 0; e < m; e++) {
             if (s.isRemoved(e)) continue;
