@@ -39,8 +39,8 @@ import org.shutline.trace.ValveSegments;
  * meshed layouts, never more than O(size of the common dominator's subtree and its
  * arcs), so the valve table is O(V (N + E)) in the worst case. Measured on a 200 x 200
  * grid (151 414 nodes, 55 707 valves): all tables in about 0.14 s against about 53 s for
- * the brute force (docs/engine.md). {@link BruteForceOutages} is the plain
- * per-case reference.
+ * the brute force (docs/engine.md). The plain per-case reference, one traversal per
+ * case, is test code ({@code BruteForceOutages}, timed by {@code bench.OutageBenchmark}).
  */
 public final class OutageTables {
     private final ValveSegments segs;
