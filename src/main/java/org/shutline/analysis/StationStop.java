@@ -212,7 +212,7 @@ public final class StationStop {
             int u = stack[--top];
             for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
                 int l = sg.crossLink(i);
-                if (!sg.isValve(l) || !sg.isOpen(l) || cut.get(l)) continue;
+                if (!sg.isValve(l) || !sg.canFlow(l, u) || cut.get(l)) continue;
                 int w = sg.other(l, u);
                 if (!side.get(w)) {
                     side.set(w);
