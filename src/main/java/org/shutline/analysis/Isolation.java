@@ -191,8 +191,6 @@ public final class Isolation {
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
     private final BitSet critical;
-    /** Services that lie in a segment (on active pipe). */
-    private final BitSet inSegment;
     /** Station stops, found on first use, then reused. */
     private final java.util.concurrent.atomic.AtomicReferenceArray<StationStop.Result> stopCache;
     /** Built on the first point or polygon zone, then reused. */
@@ -209,8 +207,6 @@ public final class Isolation {
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
-        this.inSegment = new BitSet(all.size());
-        for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
         this.stopCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
@@ -324,27 +320,13 @@ public final class Isolation {
         return IsolationCore.growInto(sg, (BitSet) region.clone(), seed);
     }
 
-    /** Services of a set of segments (each service lies in at most one). */
+    /** Services of a set of segments ({@link ValveSegments#servicesOf}). */
     BitSet servicesOf(BitSet segments) {
-        if (segments.cardinality() * 2 > sg.segmentCount()) {
-            // most segments: start from every service that has a segment and clear the others
-            BitSet out = (BitSet) inSegment.clone();
-            for (int seg = segments.nextClearBit(0); seg < sg.segmentCount(); seg = segments.nextClearBit(seg + 1)) {
-                for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.clear(segs.serviceAt(i));
-            }
-            return out;
-        }
-        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
-        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
-            for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
-        }
-        return out;
+        return segs.servicesOf(segments);
     }
 
     private long metersOf(BitSet segments) {
-        long m = 0;
-        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += segs.meters(seg);
-        return m;
+        return segs.metersOf(segments);
     }
 
     /**

@@ -118,8 +118,7 @@ public final class OverpressureShutoff {
         BitSet after = sg.reach(null, closedLinks, stopped, shutSources);
         BitSet lost = (BitSet) before.clone();
         lost.andNot(after);
-        BitSet off = new BitSet(s.serviceCount());
-        for (int seg = lost.nextSetBit(0); seg >= 0; seg = lost.nextSetBit(seg + 1)) for (int sv : segs.services(seg)) off.set(sv);
+        BitSet off = segs.servicesOf(lost);
         for (int i = 0; i < feeds.size(); i++) {
             if (feeds.get(i).isStation()) feeds.set(i, feeds.get(i).withFallbacks(fallbacks(segs, feeds, i, stopped, shutSources, lost)));
         }
@@ -171,8 +170,8 @@ public final class OverpressureShutoff {
             stays.andNot(lostF);
             List<String> then = new ArrayList<>();
             for (String id : valves) if (!feed.upstream().valveIds().contains(id)) then.add(id);
-            out.add(new Isolation.Fallback(f.valveId(), f.why(), f.isolable(), valves, then, serviceIds(segs, add), meters(segs, add),
-                    f.isolable() ? List.of() : List.of(feed.id()), List.of(), List.of(), serviceIds(segs, stays), meters(segs, stays)));
+            out.add(new Isolation.Fallback(f.valveId(), f.why(), f.isolable(), valves, then, serviceIds(segs, add), segs.metersOf(add),
+                    f.isolable() ? List.of() : List.of(feed.id()), List.of(), List.of(), serviceIds(segs, stays), segs.metersOf(stays)));
         }
         return out;
     }
@@ -182,12 +181,6 @@ public final class OverpressureShutoff {
         List<Service> all = segs.state().network().services();
         for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) for (int sv : segs.services(g)) out.add(all.get(sv).id());
         return out;
-    }
-
-    private static long meters(ValveSegments segs, BitSet segments) {
-        long m = 0;
-        for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) m += segs.meters(g);
-        return m;
     }
 
     private static int stationIndex(NetworkState s, String id) {

@@ -49,8 +49,7 @@ final class Suggestions {
         zone.andNot(fedAfter);
         List<Isolation.Fallback> fallbacks = new ArrayList<>();
         if (!zone.isEmpty()) {
-            BitSet offStep = new BitSet();
-            for (int g = zone.nextSetBit(0); g >= 0; g = zone.nextSetBit(g + 1)) for (int i : segs.services(g)) offStep.set(i);
+            BitSet offStep = segs.servicesOf(zone);
             Isolation iso = new Isolation(segs, Isolation.Options.of(settings.doubt()));
             for (int v : valves) {
                 int l = sg.valveLink(v);

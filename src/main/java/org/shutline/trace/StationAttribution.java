@@ -50,7 +50,7 @@ final class StationAttribution {
             int seg = vs.nodeSegment(v);
             if (seg >= 0 && reachedAll.get(seg)) live.set(v);
         }
-        BitSet fed = services(vs, reachedAll, s.serviceCount());
+        BitSet fed = vs.servicesOf(reachedAll);
         BitSet liveEdges = edges(edgeCsr, reachedAll, s.edgeCount());
         int nst = s.stationCount();
         List<BitSet> stServices = new ArrayList<>(nst);
@@ -72,15 +72,15 @@ final class StationAttribution {
                 continue;
             }
             BitSet reach = reachFrom(sg, vs.nodeSegment(s.edgeTo(e)), queue);
-            BitSet through = services(vs, reach, s.serviceCount());
+            BitSet through = vs.servicesOf(reach);
             through.and(fed);
             stServices.add(through);
             stEdges.add(edges(edgeCsr, reach, s.edgeCount()));
             BitSet lostSegs = lostWithout(sg, reach, reachedAll, sg.stationLink(st), queue);
-            BitSet exclusive = services(vs, lostSegs, s.serviceCount());
+            BitSet exclusive = vs.servicesOf(lostSegs);
             stExclusive.add(exclusive);
-            stMeters[st] = meters(vs, reach);
-            stExMeters[st] = meters(vs, lostSegs);
+            stMeters[st] = vs.metersOf(reach);
+            stExMeters[st] = vs.metersOf(lostSegs);
             int outSys = s.graph().systemIndex(s.network().stations().get(st).outSys());
             for (int seg = reach.nextSetBit(0); seg >= 0; seg = reach.nextSetBit(seg + 1)) {
                 if (segSys[seg] >= 0 || segSys[seg] == -1) {
@@ -108,7 +108,7 @@ final class StationAttribution {
         unfed.set(0, s.serviceCount());
         unfed.andNot(fed);
         return new FeedTrace.Result(live, fed, liveEdges, stServices, stExclusive, stEdges, stMeters, stExMeters,
-                multi, unfed, FeedTrace.deadMains(s, liveEdges), meters(vs, reachedAll));
+                multi, unfed, FeedTrace.deadMains(s, liveEdges), vs.metersOf(reachedAll));
     }
 
     private static int[] edgeSegments(ValveSegments vs, int m) {
@@ -209,14 +209,6 @@ final class StationAttribution {
         return seen;
     }
 
-    private static BitSet services(ValveSegments vs, BitSet segs, int n) {
-        BitSet out = new BitSet(n);
-        for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) {
-            for (int i = vs.serviceStart(seg); i < vs.serviceEnd(seg); i++) out.set(vs.serviceAt(i));
-        }
-        return out;
-    }
-
     private static BitSet edges(Csr csr, BitSet segs, int m) {
         BitSet out = new BitSet(m);
         int[] start = csr.start();
@@ -225,12 +217,6 @@ final class StationAttribution {
             for (int i = start[seg]; i < start[seg + 1]; i++) out.set(list[i]);
         }
         return out;
-    }
-
-    private static long meters(ValveSegments vs, BitSet segs) {
-        long m = 0;
-        for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) m += vs.meters(seg);
-        return m;
     }
 
     private static int serviceSystem(NetworkState s, int service) {

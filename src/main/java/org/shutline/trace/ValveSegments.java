@@ -1,6 +1,7 @@
 package org.shutline.trace;
 
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.Progress;
 import org.shutline.model.Service;
@@ -159,6 +160,46 @@ public final class ValveSegments {
     public int serviceEnd(int seg) { return serviceStart[seg + 1]; }
     /** The i-th entry of the services-by-segment list (use with {@link #serviceStart}/{@link #serviceEnd}); no copy. */
     public int serviceAt(int i) { return serviceList[i]; }
+    /**
+     * The services of a set of segments (every service lies in at most one segment), a
+     * fresh set: from the per-segment lists, or, for more than half of the segments, from
+     * every service in a segment minus those of the others; O(services reported) either way.
+     */
+    public BitSet servicesOf(BitSet segments) {
+        if (segments.cardinality() * 2 > count) {
+            BitSet out = inSegment();
+            for (int seg = segments.nextClearBit(0); seg < count; seg = segments.nextClearBit(seg + 1)) {
+                for (int i = serviceStart[seg]; i < serviceStart[seg + 1]; i++) out.clear(serviceList[i]);
+            }
+            return out;
+        }
+        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
+            for (int i = serviceStart[seg]; i < serviceStart[seg + 1]; i++) out.set(serviceList[i]);
+        }
+        return out;
+    }
+
+    /** The meters of a set of segments, from the per-segment sums. */
+    public long metersOf(BitSet segments) {
+        long m = 0;
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += meters[seg];
+        return m;
+    }
+
+    /** Services that lie in a segment; built on first use and shared (a copy is returned). */
+    private volatile BitSet inSegment;
+
+    private BitSet inSegment() {
+        BitSet b = inSegment;
+        if (b == null) {
+            b = new BitSet(serviceSegment.length);
+            for (int i = 0; i < serviceSegment.length; i++) if (serviceSegment[i] >= 0) b.set(i);
+            inSegment = b;
+        }
+        return (BitSet) b.clone();
+    }
+
     /** True for a segment with no active pipe (see class comment). */
     public boolean isEmpty(int seg) { return mainCount(seg) == 0; }
     /** Valves (state indices) on the boundary of a segment. */
