@@ -1,5 +1,6 @@
 package org.shutline.analysis;
 
+import org.shutline.topology.Csr;
 import java.util.Arrays;
 
 /**
@@ -26,7 +27,8 @@ final class Dominators {
 
     Dominators(int n, int[] succStart, int[] succ) {
         this.n = n;
-        int[][] pred = reverse(n, succStart, succ);
+        Csr preds = Csr.reverse(succStart, succ);
+        int[] predStart = preds.start(), pred = preds.items();
         int[] post = new int[n];
         Arrays.fill(post, -1);
         int[] order = new int[n];
@@ -41,8 +43,8 @@ final class Dominators {
             for (int k = count - 2; k >= 0; k--) { // reverse postorder, root (last) skipped
                 int b = order[k];
                 int nd = -1;
-                for (int i = pred[0][b]; i < pred[0][b + 1]; i++) {
-                    int p = pred[1][i];
+                for (int i = predStart[b]; i < predStart[b + 1]; i++) {
+                    int p = pred[i];
                     if (idom[p] < 0) continue;
                     nd = nd < 0 ? p : intersect(p, nd, post);
                 }
@@ -66,16 +68,6 @@ final class Dominators {
             while (post[b] < post[a]) b = idom[b];
         }
         return a;
-    }
-
-    private static int[][] reverse(int n, int[] start, int[] succ) {
-        int[] ps = new int[n + 1];
-        for (int v = 0; v < n; v++) for (int i = start[v]; i < start[v + 1]; i++) ps[succ[i] + 1]++;
-        for (int v = 0; v < n; v++) ps[v + 1] += ps[v];
-        int[] p = new int[ps[n]];
-        int[] fill = Arrays.copyOf(ps, n);
-        for (int v = 0; v < n; v++) for (int i = start[v]; i < start[v + 1]; i++) p[fill[succ[i]]++] = v;
-        return new int[][] {ps, p};
     }
 
     /** Iterative DFS from 0: post[v] numbers, order[post] = v; returns the count reached. */
@@ -108,7 +100,8 @@ final class Dominators {
 
     /** Preorder, subtree sizes and depths of the dominator tree; iterative. */
     private void treeOrder() {
-        int[][] kids = Csr.group(idom, n);
+        Csr tree = Csr.group(idom, n);
+        int[] kidStart = tree.start(), kids = tree.items();
         int[] stack = new int[Math.max(1, reachable)];
         int top = 0, c = 0;
         stack[top++] = 0;
@@ -116,8 +109,8 @@ final class Dominators {
             int v = stack[--top];
             pre[v] = c;
             preorder[c++] = v;
-            for (int i = kids[0][v]; i < kids[0][v + 1]; i++) {
-                int w = kids[1][i];
+            for (int i = kidStart[v]; i < kidStart[v + 1]; i++) {
+                int w = kids[i];
                 if (w == v) continue;
                 depth[w] = depth[v] + 1;
                 stack[top++] = w;

@@ -12,6 +12,7 @@ import org.shutline.model.Service;
 import org.shutline.plan.PlanStates;
 import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
+import org.shutline.trace.Passage;
 import org.shutline.trace.ValveSegments;
 
 /**
@@ -162,7 +163,7 @@ public final class InstructionCheck {
         int inlet = e < 0 || state.isRemoved(e) ? -1 : state.edgeFrom(e);
         if (r.isolation() == null) {
             Outcome o = apply(List.of(), List.of(), List.of(), List.of(), List.of(), query);
-            if (inlet >= 0 && state.stationInService(r.station()) && o.live.get(inlet)) {
+            if (Passage.stationPasses(state, r.station(), o.live)) {
                 throw new UnverifiedInstructionException(query, "station " + r.stationId() + " is said to pass no gas (" + r.note() + ") but its inlet is live");
             }
             return;

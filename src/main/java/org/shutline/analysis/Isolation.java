@@ -59,6 +59,10 @@ import org.shutline.trace.ValveSegments;
  * {@code serviceIdsOff}, {@code unlistedValves} and {@code closedBoundaryValves} are
  * immutable lists that look ids up when read, so an outcome of two million services
  * costs O(words of the set) until someone reads the ids.
+ *
+ * <p>Each outcome (the zone's, and each fallback or alternative tried) is an
+ * {@link IsolationCore}; this class adds the fallbacks, the alternative, the station
+ * stops and the result records.
  */
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
@@ -89,7 +93,6 @@ public final class Isolation {
     /** One valve to close, in operating order (1 = first). */
     public record ValveStep(int order, String valveId, int valve, Operability operable, boolean overdue, int hops) {}
 
-    /** What to do if valve {@code valveId} fails to close. */
     /**
      * What to do if valve {@code valveId} fails to close. When not {@code isolable},
      * {@code stationsToStop} and {@code sourcesInRegion} name what must be stopped or shut
@@ -180,7 +183,6 @@ public final class Isolation {
     }
 
     private final ValveSegments segs;
-    private final boolean plain;
     private final SegmentGraph sg;
     private final NetworkState state;
     private final Options options;
@@ -189,35 +191,22 @@ public final class Isolation {
     private final int[] hops;
     /** Services with a critical customer, once per instance. */
     private final BitSet critical;
-    /** Services that lie in a segment (on active pipe). */
-    private final BitSet inSegment;
     /** Station stops, found on first use, then reused. */
     private final java.util.concurrent.atomic.AtomicReferenceArray<StationStop.Result> stopCache;
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
     public Isolation(ValveSegments segments, Options options) {
-        this(segments, options, false);
-    }
-
-    /**
-     * With {@code plain}, every core is computed the plain way (region grown from the
-     * whole seed, the whole boundary scanned); the tests compare it with the default.
-     */
-    Isolation(ValveSegments segments, Options options, boolean plain) {
-        this.plain = plain;
         this.segs = segments;
         this.sg = segments.graph();
         this.state = segments.state();
         this.options = options;
         this.doubt = options.doubt();
         this.before = sg.reachFromSources(null, null);
-        this.hops = hopsFromSources();
+        this.hops = sg.hopsFromSources();
         List<Service> all = state.network().services();
         this.critical = new BitSet(all.size());
         for (int i = 0; i < all.size(); i++) if (all.get(i).isCritical()) critical.set(i);
-        this.inSegment = new BitSet(all.size());
-        for (int i = 0; i < all.size(); i++) if (segs.serviceSegment(i) >= 0) inSegment.set(i);
         this.stopCache = new java.util.concurrent.atomic.AtomicReferenceArray<>(state.stationCount());
     }
 
@@ -234,14 +223,13 @@ public final class Isolation {
     public Result isolate(Zone zone) {
         if (index == null && !(zone instanceof Zone.OfSegments) && !(zone instanceof Zone.OfMains)) index = new EdgeIndex(segs);
         BitSet zoneSegs = ZoneSegments.of(zone, segs, index);
-        Core core = core(grow(zoneSegs), true);
+        IsolationCore core = IsolationCore.of(this, grow(zoneSegs), true);
         List<Fallback> fallbacks = new ArrayList<>();
         Alternative alt = null;
         for (int i = 0; i < core.listed.size(); i++) {
             int l = core.listed.get(i);
             int v = sg.linkFeature(l);
-            Core grown = plain ? core(grow(with(core.region, core.far.get(i))), true)
-                    : core(grownBy(core.region, core.far.get(i)), false);
+            IsolationCore grown = grownCore(core, i);
             String why = whyFallback(v);
             if (why != null) fallbacks.add(fallback(v, why, core, grown));
             boolean noWorse = grown.sources.size() <= core.sources.size()
@@ -277,7 +265,7 @@ public final class Isolation {
      * recomputed with it; what it adds is counted against the whole isolation, and the
      * station is stopped at the station itself when the grown stop is not done by valves.
      */
-    private void stopValveFallbacks(Core core, StationStop.Result stop, List<Fallback> out) {
+    private void stopValveFallbacks(IsolationCore core, StationStop.Result stop, List<Fallback> out) {
         Result stopIso = stop.isolation();
         for (Fallback sf : stopIso.fallbacks()) {
             int v = -1;
@@ -287,7 +275,7 @@ public final class Isolation {
             for (Fallback f : out) if (f.valveId().equals(sf.valveId())) known = true;
             if (known) continue;
             StationStop.Result grown = StationStop.grownBy(this, stop, v);
-            Core g = core(core.region, true, stop.station(), grown);
+            IsolationCore g = IsolationCore.of(this, core.region, true, stop.station(), grown);
             List<String> then = new ArrayList<>();
             List<String> already = new ArrayList<>(ordered(core));
             for (StationStop.Result st : core.stops()) already.addAll(st.valves());
@@ -303,14 +291,15 @@ public final class Isolation {
     }
 
     /**
-     * The region grown across segment {@code seg}: {@code region} is already closed under
-     * growth across open inoperable valves, so growing the union only needs a search from
-     * {@code seg}, with the region counted as visited (same set as growing the union).
+     * The outcome of {@code core}'s region grown across its i-th listed valve, as the
+     * fallback and the alternative use it: the region is already closed under growth
+     * across open inoperable valves, so the union only needs a search from the far
+     * segment ({@link #grownBy}); only the listed valves are found, from the smaller side.
+     * The tests compare it with the region grown from the whole seed and the whole
+     * boundary scanned.
      */
-    private static BitSet with(BitSet b, int seg) {
-        BitSet c = (BitSet) b.clone();
-        c.set(seg);
-        return c;
+    IsolationCore grownCore(IsolationCore core, int i) {
+        return IsolationCore.of(this, grownBy(core.region, core.far.get(i)), false);
     }
 
     /** {@code region} grown across valve {@code v}: both its sides, and on across open inoperable valves. */
@@ -321,132 +310,23 @@ public final class Isolation {
             seed.set(sg.linkA(l));
             seed.set(sg.linkB(l));
         }
-        return growInto((BitSet) region.clone(), seed);
+        return IsolationCore.growInto(sg, (BitSet) region.clone(), seed);
     }
 
+    /** {@code region} (closed under growth) grown across segment {@code seg}: a search from seg, the region counted as visited. */
     private BitSet grownBy(BitSet region, int seg) {
         BitSet seed = new BitSet(sg.segmentCount());
         seed.set(seg);
-        return growInto((BitSet) region.clone(), seed);
+        return IsolationCore.growInto(sg, (BitSet) region.clone(), seed);
     }
 
-    /** The isolation of a seed set of segments, without fallbacks. */
-    private final class Core {
-        BitSet region;
-        BitSet after;
-        BitSet off;
-        /** Services of the off segments; built only when asked for ({@link #offServices()}). */
-        private BitSet offServices;
-        final List<Integer> listed = new ArrayList<>();
-        final List<Integer> far = new ArrayList<>();
-        /** Links (not ids: only the plan's core is reported) of closed and of unlisted bounding valves. */
-        int[] closedBounds = new int[8];
-        int closedCount;
-        int[] unlisted = new int[64];
-        int unlistedCount;
-        final List<String> sources = new ArrayList<>();
-        final List<Integer> stations = new ArrayList<>();
-        /** The stops of {@link #stations} that valves do (closed in this outcome); the others are stopped at the station. */
-        final List<StationStop.Result> byValves = new ArrayList<>();
-
-        /** The stop of each station to stop as this outcome does it (by valves, or at the station when none is listed). */
-        List<StationStop.Result> stops() {
-            List<StationStop.Result> out = new ArrayList<>(byValves);
-            for (int st : stations) {
-                boolean listed = false;
-                for (StationStop.Result r : byValves) if (r.station() == st) listed = true;
-                if (listed) continue;
-                StationStop.Result r = st == replacedStation ? replacement : stationStop(st);
-                if (r != null) out.add(r);
-            }
-            return out;
-        }
-
-        int replacedStation = -1;
-        StationStop.Result replacement;
-
-        /** Services off: those of the off segments (each service lies in one segment). */
-        BitSet offServices() {
-            if (offServices == null) offServices = servicesOf(off);
-            return offServices;
-        }
-    }
-
-    private BitSet servicesOf(BitSet segments) {
-        if (segments.cardinality() * 2 > sg.segmentCount()) {
-            // most segments: start from every service that has a segment and clear the others
-            BitSet out = (BitSet) inSegment.clone();
-            for (int seg = segments.nextClearBit(0); seg < sg.segmentCount(); seg = segments.nextClearBit(seg + 1)) {
-                for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.clear(segs.serviceAt(i));
-            }
-            return out;
-        }
-        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
-        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
-            for (int i = segs.serviceStart(seg); i < segs.serviceEnd(seg); i++) out.set(segs.serviceAt(i));
-        }
-        return out;
+    /** Services of a set of segments ({@link ValveSegments#servicesOf}). */
+    BitSet servicesOf(BitSet segments) {
+        return segs.servicesOf(segments);
     }
 
     private long metersOf(BitSet segments) {
-        long m = 0;
-        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += segs.meters(seg);
-        return m;
-    }
-
-    /**
-     * The isolation of a region already grown across open inoperable valves. With
-     * {@code report}, every bounding valve is classified (listed, already closed,
-     * unlisted); without, only the listed ones are found (all that fallbacks and the
-     * alternative need), from whichever side has fewer links to scan: the region's
-     * boundary or the segments still fed after. Both give the listed valves in the
-     * same order (region segment, then link index).
-     */
-    private Core core(BitSet region, boolean report) {
-        return core(region, report, -1, null);
-    }
-
-    /**
-     * As {@link #core(BitSet, boolean)}, with station {@code replaced}'s stop taken to be
-     * {@code replacement} (a stop grown because one of its valves will not close) when
-     * that station feeds the region.
-     */
-    private Core core(BitSet region, boolean report, int replaced, StationStop.Result replacement) {
-        Core c = new Core();
-        c.region = region;
-        c.replacedStation = replaced;
-        c.replacement = replacement;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int seg = sg.sourceSegment(i);
-            if (seg >= 0 && c.region.get(seg)) c.sources.add(state.network().sources().get(i).id());
-        }
-        BitSet stopped = new BitSet(state.stationCount());
-        BitSet blocked = c.region;
-        for (int st = 0; st < state.stationCount(); st++) {
-            int l = sg.stationLink(st);
-            if (l < 0 || !sg.isOpen(l)) continue;
-            if (c.region.get(sg.linkB(l)) && !c.region.get(sg.linkA(l)) && before.get(sg.linkA(l))) {
-                c.stations.add(st);
-                StationStop.Result stop = st == replaced ? replacement : stationStop(st);
-                if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
-                    // the instruction closes the stop's valves: its inlet-side region goes dead with everything fed only through it
-                    if (blocked == c.region) blocked = (BitSet) c.region.clone();
-                    blocked.or(stop.isolation().region());
-                    c.byValves.add(stop);
-                } else {
-                    stopped.set(st);
-                }
-            }
-        }
-        c.after = sg.reachFromSourcesStopping(blocked, stopped);
-        if (!report && crossLinks(c.after) < crossLinks(c.region)) {
-            listedFromFedSide(c);
-        } else {
-            scanBoundary(c);
-        }
-        c.off = (BitSet) before.clone();
-        c.off.andNot(c.after);
-        return c;
+        return segs.metersOf(segments);
     }
 
     /**
@@ -457,7 +337,7 @@ public final class Isolation {
 
     /** {@link Counts} of isolating {@code seed} (grown across open inoperable valves); same rules as {@link #isolate}. */
     Counts counts(BitSet seed) {
-        Core c = core(grow(seed), false);
+        IsolationCore c = IsolationCore.of(this, grow(seed), false);
         long n = 0;
         for (int seg = c.off.nextSetBit(0); seg >= 0; seg = c.off.nextSetBit(seg + 1)) n += segs.serviceCount(seg);
         BitSet off = c.offServices();
@@ -485,112 +365,9 @@ public final class Isolation {
         return out;
     }
 
-    private int crossLinks(BitSet set) {
-        int n = 0;
-        for (int seg = set.nextSetBit(0); seg >= 0; seg = set.nextSetBit(seg + 1)) n += sg.crossEnd(seg) - sg.crossStart(seg);
-        return n;
-    }
-
-    /**
-     * Listed valves found from the fed side: open valve links from a segment fed after
-     * into the region (the fed side never lies in the region). Sorted by (region
-     * segment, link) as {@link #scanBoundary} finds them.
-     */
-    private void listedFromFedSide(Core c) {
-        long[] keys = new long[16];
-        int n = 0;
-        for (int a = c.after.nextSetBit(0); a >= 0; a = c.after.nextSetBit(a + 1)) {
-            for (int i = sg.crossStart(a); i < sg.crossEnd(a); i++) {
-                int l = sg.crossLink(i);
-                if (!sg.isValve(l) || !sg.isOpen(l)) continue;
-                int r = sg.other(l, a);
-                if (!c.region.get(r)) continue;
-                if (n == keys.length) keys = java.util.Arrays.copyOf(keys, n * 2);
-                keys[n++] = ((long) r << 32) | l;
-            }
-        }
-        java.util.Arrays.sort(keys, 0, n);
-        for (int k = 0; k < n; k++) {
-            int l = (int) keys[k];
-            c.listed.add(l);
-            c.far.add(sg.other(l, (int) (keys[k] >>> 32)));
-        }
-    }
-
-    /** Every open or closed valve on the region's boundary, by region segment then link index. */
-    private void scanBoundary(Core c) {
-        for (int seg = c.region.nextSetBit(0); seg >= 0; seg = c.region.nextSetBit(seg + 1)) {
-            for (int i = sg.crossStart(seg); i < sg.crossEnd(seg); i++) {
-                int l = sg.crossLink(i);
-                if (!sg.isValve(l)) continue;
-                int o = sg.other(l, seg);
-                if (c.region.get(o)) continue;
-                if (!sg.isOpen(l)) {
-                    if (c.closedCount == c.closedBounds.length) c.closedBounds = java.util.Arrays.copyOf(c.closedBounds, c.closedCount * 2);
-                    c.closedBounds[c.closedCount++] = l;
-                } else if (c.after.get(o)) {
-                    c.listed.add(l);
-                    c.far.add(o);
-                } else {
-                    if (c.unlistedCount == c.unlisted.length) c.unlisted = java.util.Arrays.copyOf(c.unlisted, c.unlistedCount * 2);
-                    c.unlisted[c.unlistedCount++] = l;
-                }
-            }
-        }
-    }
-
     /** The seed grown across open valves with operable = no; O(segments + links). */
     BitSet grow(BitSet seed) {
-        return growInto(new BitSet(sg.segmentCount()), seed);
-    }
-
-    /** Adds the seed and everything reached from it across open inoperable valves to {@code region}. */
-    private BitSet growInto(BitSet region, BitSet seed) {
-        region.or(seed);
-        int[] stack = new int[Math.max(1, sg.segmentCount())];
-        int top = 0;
-        for (int s = seed.nextSetBit(0); s >= 0; s = seed.nextSetBit(s + 1)) stack[top++] = s;
-        while (top > 0) {
-            int u = stack[--top];
-            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
-                int l = sg.crossLink(i);
-                if (!sg.isOpenInoperable(l)) continue;
-                int w = sg.other(l, u);
-                if (!region.get(w)) {
-                    region.set(w);
-                    stack[top++] = w;
-                }
-            }
-        }
-        return region;
-    }
-
-    private int[] hopsFromSources() {
-        int n = sg.segmentCount();
-        int[] d = new int[n];
-        java.util.Arrays.fill(d, Integer.MAX_VALUE);
-        int[] queue = new int[Math.max(1, n)];
-        int head = 0, tail = 0;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int s = sg.sourceSegment(i);
-            if (s >= 0 && d[s] != 0) {
-                d[s] = 0;
-                queue[tail++] = s;
-            }
-        }
-        while (head < tail) {
-            int u = queue[head++];
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
-                if (!sg.canFlow(l, u)) continue;
-                int w = sg.other(l, u);
-                if (d[w] == Integer.MAX_VALUE) {
-                    d[w] = d[u] + 1;
-                    queue[tail++] = w;
-                }
-            }
-        }
-        return d;
+        return IsolationCore.growInto(sg, new BitSet(sg.segmentCount()), seed);
     }
 
     /** Null when the valve is relied on without doubt; else why it needs a fallback. */
@@ -602,7 +379,7 @@ public final class Isolation {
         return ValveDoubt.of(state, v, doubt).overdue();
     }
 
-    private Fallback fallback(int v, String why, Core core, Core grown) {
+    private Fallback fallback(int v, String why, IsolationCore core, IsolationCore grown) {
         List<String> all = ordered(grown);
         List<String> before = new ArrayList<>();
         for (int l : core.listed) before.add(state.valveId(sg.linkFeature(l)));
@@ -624,20 +401,20 @@ public final class Isolation {
      * station's inlet no longer needs that station's stop, so pipe the stop would have
      * shut stays on.
      */
-    private static BitSet addedSegments(Core core, Core grown) {
+    private static BitSet addedSegments(IsolationCore core, IsolationCore grown) {
         BitSet add = (BitSet) grown.off.clone();
         add.andNot(core.off);
         return add;
     }
 
-    private int addedCount(Core core, Core grown) {
+    private int addedCount(IsolationCore core, IsolationCore grown) {
         BitSet add = addedSegments(core, grown);
         int n = 0;
         for (int seg = add.nextSetBit(0); seg >= 0; seg = add.nextSetBit(seg + 1)) n += segs.serviceCount(seg);
         return n;
     }
 
-    private List<ValveStep> steps(Core c) {
+    private List<ValveStep> steps(IsolationCore c) {
         List<ValveStep> out = new ArrayList<>();
         List<int[]> order = new ArrayList<>();
         for (int i = 0; i < c.listed.size(); i++) order.add(new int[] {c.listed.get(i), hops[c.far.get(i)]});
@@ -650,7 +427,7 @@ public final class Isolation {
         return out;
     }
 
-    private List<String> ordered(Core c) {
+    private List<String> ordered(IsolationCore c) {
         List<String> ids = new ArrayList<>();
         for (ValveStep s : steps(c)) ids.add(s.valveId());
         return ids;
@@ -668,7 +445,7 @@ public final class Isolation {
     }
 
 
-    private Result result(BitSet zoneSegs, Core c, List<Fallback> fallbacks, Alternative alt) {
+    private Result result(BitSet zoneSegs, IsolationCore c, List<Fallback> fallbacks, Alternative alt) {
         List<String> stationIds = stationIds(c.stations);
         List<String> inletValves = new ArrayList<>();
         List<StationStop.Result> stops = new ArrayList<>();
@@ -736,6 +513,11 @@ public final class Isolation {
     private static final ThreadLocal<BitSet> STOPPING = ThreadLocal.withInitial(BitSet::new);
 
     ValveSegments segments() { return segs; }
+
+    SegmentGraph segmentGraph() { return sg; }
+
+    /** Segments fed before any closing (the instance's own set: not to be changed). */
+    BitSet before() { return before; }
 
     Options options() { return options; }
 }

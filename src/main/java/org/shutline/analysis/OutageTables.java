@@ -1,5 +1,6 @@
 package org.shutline.analysis;
 
+import org.shutline.topology.Csr;
 import java.util.Arrays;
 import org.shutline.model.Progress;
 import org.shutline.trace.SegmentGraph;
@@ -38,8 +39,8 @@ import org.shutline.trace.ValveSegments;
  * meshed layouts, never more than O(size of the common dominator's subtree and its
  * arcs), so the valve table is O(V (N + E)) in the worst case. Measured on a 200 x 200
  * grid (151 414 nodes, 55 707 valves): all tables in about 0.14 s against about 53 s for
- * the brute force (docs/engine.md). {@link BruteForceOutages} is the plain
- * per-case reference.
+ * the brute force (docs/engine.md). The plain per-case reference, one traversal per
+ * case, is test code ({@code BruteForceOutages}, timed by {@code bench.OutageBenchmark}).
  */
 public final class OutageTables {
     private final ValveSegments segs;
@@ -240,10 +241,11 @@ public final class OutageTables {
                 to[c++] = b;
             }
         }
-        int[][] g = Csr.group(Arrays.copyOf(from, c), nodes);
-        int[] succ = new int[c];
-        for (int i = 0; i < c; i++) succ[i] = to[g[1][i]];
-        return new int[][] {g[0], succ};
+        int arcs = c;
+        Csr g = Csr.build(nodes, sink -> {
+            for (int i = 0; i < arcs; i++) sink.add(from[i], to[i]);
+        });
+        return new int[][] {g.start(), g.items()};
     }
 
     public ValveSegments segments() { return segs; }

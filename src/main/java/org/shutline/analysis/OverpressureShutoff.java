@@ -91,8 +91,7 @@ public final class OverpressureShutoff {
         BitSet stopped = new BitSet(s.stationCount());
         BitSet shutSources = new BitSet(sg.sourceCount());
         for (int st = 0; st < s.stationCount(); st++) {
-            int l = sg.stationLink(st);
-            if (l < 0 || !sg.isOpen(l) || !onSystem.get(sg.linkB(l)) || onSystem.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
+            if (!sg.feedsInto(sg.stationLink(st), onSystem, before)) continue;
             Station station = net.stations().get(st);
             StationStop.Result stop = iso.stationStop(st);
             Isolation.Result up = stop.isolation();
@@ -116,11 +115,10 @@ public final class OverpressureShutoff {
         for (int seg = onSystem.nextSetBit(0); seg >= 0; seg = onSystem.nextSetBit(seg + 1)) {
             if (before.get(seg)) for (int sv : segs.services(seg)) atRisk.set(sv);
         }
-        BitSet after = reach(sg, closedLinks, stopped, shutSources);
+        BitSet after = sg.reach(null, closedLinks, stopped, shutSources);
         BitSet lost = (BitSet) before.clone();
         lost.andNot(after);
-        BitSet off = new BitSet(s.serviceCount());
-        for (int seg = lost.nextSetBit(0); seg >= 0; seg = lost.nextSetBit(seg + 1)) for (int sv : segs.services(seg)) off.set(sv);
+        BitSet off = segs.servicesOf(lost);
         for (int i = 0; i < feeds.size(); i++) {
             if (feeds.get(i).isStation()) feeds.set(i, feeds.get(i).withFallbacks(fallbacks(segs, feeds, i, stopped, shutSources, lost)));
         }
@@ -165,15 +163,15 @@ public final class OverpressureShutoff {
             }
             for (int v = 0; v < s.valveCount(); v++) if (valves.contains(s.valveId(v)) && sg.valveLink(v) >= 0) closed.set(sg.valveLink(v));
             BitSet lostF = segs.graph().reachFromSources(null, null);
-            lostF.andNot(reach(sg, closed, stop, shutSources));
+            lostF.andNot(sg.reach(null, closed, stop, shutSources));
             BitSet add = (BitSet) lostF.clone();
             add.andNot(lost);
             BitSet stays = (BitSet) lost.clone();
             stays.andNot(lostF);
             List<String> then = new ArrayList<>();
             for (String id : valves) if (!feed.upstream().valveIds().contains(id)) then.add(id);
-            out.add(new Isolation.Fallback(f.valveId(), f.why(), f.isolable(), valves, then, serviceIds(segs, add), meters(segs, add),
-                    f.isolable() ? List.of() : List.of(feed.id()), List.of(), List.of(), serviceIds(segs, stays), meters(segs, stays)));
+            out.add(new Isolation.Fallback(f.valveId(), f.why(), f.isolable(), valves, then, serviceIds(segs, add), segs.metersOf(add),
+                    f.isolable() ? List.of() : List.of(feed.id()), List.of(), List.of(), serviceIds(segs, stays), segs.metersOf(stays)));
         }
         return out;
     }
@@ -183,40 +181,6 @@ public final class OverpressureShutoff {
         List<Service> all = segs.state().network().services();
         for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) for (int sv : segs.services(g)) out.add(all.get(sv).id());
         return out;
-    }
-
-    private static long meters(ValveSegments segs, BitSet segments) {
-        long m = 0;
-        for (int g = segments.nextSetBit(0); g >= 0; g = segments.nextSetBit(g + 1)) m += segs.meters(g);
-        return m;
-    }
-
-    /** Segments reached from the sources not shut, never crossing a closed link nor a stopped station. */
-    private static BitSet reach(SegmentGraph sg, BitSet closedLinks, BitSet stopped, BitSet shutSources) {
-        BitSet seen = new BitSet(sg.segmentCount());
-        int[] queue = new int[Math.max(1, sg.segmentCount())];
-        int head = 0, tail = 0;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int seg = sg.sourceSegment(i);
-            if (seg >= 0 && !shutSources.get(i) && !seen.get(seg)) {
-                seen.set(seg);
-                queue[tail++] = seg;
-            }
-        }
-        while (head < tail) {
-            int u = queue[head++];
-            for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
-                int l = sg.crossLink(i);
-                if (!sg.canFlow(l, u) || closedLinks.get(l)) continue;
-                if (!sg.isValve(l) && stopped.get(sg.linkFeature(l))) continue;
-                int w = sg.other(l, u);
-                if (!seen.get(w)) {
-                    seen.set(w);
-                    queue[tail++] = w;
-                }
-            }
-        }
-        return seen;
     }
 
     private static int stationIndex(NetworkState s, String id) {

@@ -1,5 +1,6 @@
 package org.shutline.analysis;
 
+import org.shutline.topology.Csr;
 import java.util.Arrays;
 
 /**
@@ -53,12 +54,9 @@ final class PairCut {
         this.subSvc = subSvc;
         this.subMet = subMet;
         int n = dom.n;
-        int[] from = new int[succ.length];
-        for (int v = 0; v < n; v++) for (int i = start[v]; i < start[v + 1]; i++) from[i] = v;
-        int[][] byTarget = Csr.group(succ, n);
-        pstart = byTarget[0];
-        pred = new int[succ.length];
-        for (int i = 0; i < pred.length; i++) pred[i] = from[byTarget[1][i]];
+        Csr preds = Csr.reverse(start, succ);
+        pstart = preds.start();
+        pred = preds.items();
         tpre = new int[n];
         tsize = new int[n];
         spanningTree();
@@ -96,7 +94,8 @@ final class PairCut {
                 }
             }
         }
-        int[][] kids = Csr.group(par, n);
+        Csr tree = Csr.group(par, n);
+        int[] kidStart = tree.start(), kids = tree.items();
         Arrays.fill(tpre, -1);
         int[] stack = new int[Math.max(1, tail)];
         int[] order = new int[tail];
@@ -106,7 +105,7 @@ final class PairCut {
             int v = stack[--top];
             tpre[v] = c;
             order[c++] = v;
-            for (int i = kids[0][v]; i < kids[0][v + 1]; i++) stack[top++] = kids[1][i];
+            for (int i = kidStart[v]; i < kidStart[v + 1]; i++) stack[top++] = kids[i];
         }
         for (int k = c - 1; k >= 0; k--) {
             int v = order[k];

@@ -239,8 +239,7 @@ public final class PlanEvaluation {
         List<Station> sts = net.stations();
         for (int i = 0; i < sts.size(); i++) {
             feeds.computeIfAbsent(sts.get(i).outSys(), k -> new ArrayList<>());
-            int e = s.stationEdge(i);
-            if (e >= 0 && !s.isRemoved(e) && s.stationInService(i) && tr.isLive(s.edgeFrom(e))) feeds.get(sts.get(i).outSys()).add(sts.get(i).id());
+            if (tr.stationPasses(s, i)) feeds.get(sts.get(i).outSys()).add(sts.get(i).id());
         }
         return new StepResult(st.step(), off.cardinality(), meters, byClass, crit, wentOff, cameBack, feeds, fresh, cont,
                 st.notices(), gasOff, off, sug);

@@ -1,5 +1,6 @@
 package org.shutline.analysis;
 
+import org.shutline.topology.Csr;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -75,7 +76,7 @@ public final class RiskTables {
     private final List<SegmentRow> segmentRows;
     private final List<StationRow> stationRows;
     private final List<ValveRow> valveRows;
-    private final int[][] edgesBySegment;
+    private final Csr edgesBySegment;
     /** Pressure system of each segment's pipe (-1 for an empty segment), computed once. */
     private final int[] segSystem;
 
@@ -209,7 +210,7 @@ public final class RiskTables {
     /** The pipe of a segment as lines (a MultiLineString) in the network CRS. */
     public Geometry segmentGeometry(int seg) {
         NetworkState s = segs.state();
-        int[] st = edgesBySegment[0], list = edgesBySegment[1];
+        int[] st = edgesBySegment.start(), list = edgesBySegment.items();
         LineString[] lines = new LineString[st[seg + 1] - st[seg]];
         for (int i = st[seg]; i < st[seg + 1]; i++) {
             Geometry g = ZoneSegments.edgeLine(s, list[i]);

@@ -171,8 +171,7 @@ public final class StationStop {
         stopped.set(st);
         BitSet lostAlone = (BitSet) before.clone();
         lostAlone.andNot(sg.reachFromSourcesStopping(null, stopped));
-        BitSet ownDistrict = new BitSet();
-        for (int g = lostAlone.nextSetBit(0); g >= 0; g = lostAlone.nextSetBit(g + 1)) for (int sv : segs.services(g)) ownDistrict.set(sv);
+        BitSet ownDistrict = segs.servicesOf(lostAlone);
         BitSet other = r.servicesOff();
         other.andNot(ownDistrict);
         long otherMeters = 0;
@@ -212,7 +211,7 @@ public final class StationStop {
             int u = stack[--top];
             for (int i = sg.crossStart(u); i < sg.crossEnd(u); i++) {
                 int l = sg.crossLink(i);
-                if (!sg.isValve(l) || !sg.isOpen(l) || cut.get(l)) continue;
+                if (!sg.isValve(l) || !sg.canFlow(l, u) || cut.get(l)) continue;
                 int w = sg.other(l, u);
                 if (!side.get(w)) {
                     side.set(w);

@@ -30,7 +30,7 @@ final class Suggestions {
         NetworkState s = st.before();
         ValveSegments segs = beforeSegments;
         SegmentGraph sg = segs.graph();
-        int[] hops = hops(sg);
+        int[] hops = sg.hopsFromSources();
         List<Integer> valves = new ArrayList<>();
         BitSet links = new BitSet();
         for (String id : cv.valves()) {
@@ -49,8 +49,7 @@ final class Suggestions {
         zone.andNot(fedAfter);
         List<Isolation.Fallback> fallbacks = new ArrayList<>();
         if (!zone.isEmpty()) {
-            BitSet offStep = new BitSet();
-            for (int g = zone.nextSetBit(0); g >= 0; g = zone.nextSetBit(g + 1)) for (int i : segs.services(g)) offStep.set(i);
+            BitSet offStep = segs.servicesOf(zone);
             Isolation iso = new Isolation(segs, Isolation.Options.of(settings.doubt()));
             for (int v : valves) {
                 int l = sg.valveLink(v);
@@ -98,33 +97,5 @@ final class Suggestions {
         int l = sg.valveLink(v);
         if (l < 0) return Integer.MAX_VALUE;
         return Math.min(hops[sg.linkA(l)], hops[sg.linkB(l)]);
-    }
-
-    /** Breadth-first hop counts from the source segments (MAX_VALUE when unreached). */
-    private static int[] hops(SegmentGraph sg) {
-        int n = sg.segmentCount();
-        int[] h = new int[n];
-        java.util.Arrays.fill(h, Integer.MAX_VALUE);
-        int[] q = new int[Math.max(1, n)];
-        int head = 0, tail = 0;
-        for (int i = 0; i < sg.sourceCount(); i++) {
-            int seg = sg.sourceSegment(i);
-            if (seg >= 0 && h[seg] == Integer.MAX_VALUE) {
-                h[seg] = 0;
-                q[tail++] = seg;
-            }
-        }
-        while (head < tail) {
-            int u = q[head++];
-            for (int i = sg.adjStart(u); i < sg.adjEnd(u); i++) {
-                int l = sg.adjLink(i);
-                if (!sg.canFlow(l, u)) continue;
-                int w = sg.other(l, u);
-                if (h[w] != Integer.MAX_VALUE) continue;
-                h[w] = h[u] + 1;
-                q[tail++] = w;
-            }
-        }
-        return h;
     }
 }

@@ -16,7 +16,6 @@ import java.util.Locale;
 import java.util.Random;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
-import org.shutline.analysis.BruteForceOutages;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.OutageTables;
 import org.shutline.analysis.Zone;
@@ -67,16 +66,13 @@ public final class BenchCommand implements Callable<Integer> {
     @Option(names = "--seed", defaultValue = "7", description = "random seed (default: ${DEFAULT-VALUE})")
     private long seed;
 
-    @Option(names = "--brute-sample", defaultValue = "400", description = "segments timed for the brute-force baseline on large networks (default: ${DEFAULT-VALUE})")
-    private int bruteSample;
-
     @Option(names = "--work", paramLabel = "DIR", description = "folder for the generated files (default: a temporary folder, deleted after)")
     private Path work;
 
     /** One network's figures, times in milliseconds. */
     record Row(int mains, int nodes, int edges, int services, int segments, double rawRead, double loadTopo,
                double rawReadCpu, double loadTopoCpu, double traceLive,
-               double traceFull, double isoMedian, double isoP95, double isoIdsMedian, double segIsoMedian, double segIsoP95, double tables, double brute, boolean bruteSampled, double heapMb) {
+               double traceFull, double isoMedian, double isoP95, double isoIdsMedian, double segIsoMedian, double segIsoP95, double tables, double heapMb) {
     }
 
     @Override
@@ -140,43 +136,14 @@ public final class BenchCommand implements Callable<Integer> {
         t0 = System.nanoTime();
         OutageTables tables = OutageTables.build(segs);
         double tablesMs = ms(t0);
-        double bruteMs = bruteForce(segs, topo.graph().stationCount(), topo.graph().valveCount());
         int segCount = segs.segmentCount();
-        boolean sampled = segCount > bruteSample * 2;
         if (tables.unitCount() < 0) throw new IllegalStateException();
 
         MemoryMXBean mem = ManagementFactory.getMemoryMXBean();
         gc();
         double heap = mem.getHeapMemoryUsage().getUsed() / 1048576.0;
         return new Row(n, topo.graph().nodeCount(), topo.graph().edgeCount(), net2.services().size(), segCount, raw, loadTopo,
-                rawCpu, loadTopoCpu, live, full, isoTimes[0], isoTimes[1], isoTimes[2], segTimes[0], segTimes[1], tablesMs, bruteMs, sampled, heap);
-    }
-
-    /**
-     * Baseline 2: the plain loop, one traversal of the segment graph per case, over the
-     * same cases as the tables (every segment isolated, every station out, every valve
-     * failing). On large networks each kind is timed on a random sample and scaled.
-     */
-    private double bruteForce(ValveSegments segs, int stations, int valves) {
-        BruteForceOutages brute = new BruteForceOutages(segs);
-        Random rnd = new Random(seed);
-        long sink = 0;
-        double total = 0;
-        int[] counts = {segs.segmentCount(), stations, valves};
-        for (int kind = 0; kind < 3; kind++) {
-            int n = counts[kind];
-            if (n == 0) continue;
-            boolean sample = n > bruteSample * 2;
-            int cases = sample ? bruteSample : n;
-            long t0 = System.nanoTime();
-            for (int i = 0; i < cases; i++) {
-                int c = sample ? rnd.nextInt(n) : i;
-                sink += kind == 0 ? brute.servicesOffWhenIsolated(c) : kind == 1 ? brute.servicesOffWhenStationOut(c) : brute.servicesOffWhenFails(c);
-            }
-            total += ms(t0) * ((double) n / cases);
-        }
-        if (sink < 0) throw new IllegalStateException();
-        return total;
+                rawCpu, loadTopoCpu, live, full, isoTimes[0], isoTimes[1], isoTimes[2], segTimes[0], segTimes[1], tablesMs, heap);
     }
 
     private double[] isolations(Topology topo, Isolation iso) {
@@ -248,24 +215,23 @@ public final class BenchCommand implements Callable<Integer> {
 
     static String line(Row r) {
         return String.format(Locale.ROOT, "  %d mains: read %.0f ms, load+topology %.0f ms (%.2fx; main-thread CPU %.0f / %.0f ms, %.2fx), trace %.1f ms live / %.0f ms full, "
-                        + "isolation median %.3f ms p95 %.3f ms (median %.3f ms reading every id off), single segments median %.3f ms p95 %.3f ms, tables %.0f ms vs brute force %.0f ms%s (%.0fx), heap %.0f MB",
+                        + "isolation median %.3f ms p95 %.3f ms (median %.3f ms reading every id off), single segments median %.3f ms p95 %.3f ms, tables %.0f ms, heap %.0f MB",
                 r.mains(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(), r.rawReadCpu(), r.loadTopoCpu(),
                 r.loadTopoCpu() / r.rawReadCpu(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.isoIdsMedian(),
-                r.segIsoMedian(), r.segIsoP95(), r.tables(), r.brute(), r.bruteSampled() ? " (extrapolated)" : "", r.brute() / r.tables(), r.heapMb());
+                r.segIsoMedian(), r.segIsoP95(), r.tables(), r.heapMb());
     }
 
     static String table(List<Row> rows) {
         StringBuilder sb = new StringBuilder();
-        sb.append("| mains | nodes | edges | services | segments | raw read ms | load+topology ms | ratio | CPU ratio | trace live ms | trace with stations ms | isolation median ms | isolation p95 ms | isolation + ids read median ms | segment isolation median ms | segment isolation p95 ms | all-cases tables ms | brute force ms | speed-up | heap MB |\n");
-        sb.append("|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|\n");
+        sb.append("| mains | nodes | edges | services | segments | raw read ms | load+topology ms | ratio | CPU ratio | trace live ms | trace with stations ms | isolation median ms | isolation p95 ms | isolation + ids read median ms | segment isolation median ms | segment isolation p95 ms | all-cases tables ms | heap MB |\n");
+        sb.append("|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|\n");
         for (Row r : rows) {
-            sb.append(String.format(Locale.ROOT, "| %d | %d | %d | %d | %d | %.0f | %.0f | %.2f | %.2f | %.1f | %.0f | %.3f | %.3f | %.3f | %.3f | %.3f | %.0f | %.0f%s | %.0fx | %.0f |%n",
+            sb.append(String.format(Locale.ROOT, "| %d | %d | %d | %d | %d | %.0f | %.0f | %.2f | %.2f | %.1f | %.0f | %.3f | %.3f | %.3f | %.3f | %.3f | %.0f | %.0f |%n",
                     r.mains(), r.nodes(), r.edges(), r.services(), r.segments(), r.rawRead(), r.loadTopo(), r.loadTopo() / r.rawRead(),
                     r.loadTopoCpu() / r.rawReadCpu(), r.traceLive(), r.traceFull(), r.isoMedian(), r.isoP95(), r.isoIdsMedian(),
-                    r.segIsoMedian(), r.segIsoP95(), r.tables(), r.brute(), r.bruteSampled() ? "*" : "",
-                    r.brute() / r.tables(), r.heapMb()));
+                    r.segIsoMedian(), r.segIsoP95(), r.tables(), r.heapMb()));
         }
-        sb.append("\n`*` brute force timed on a random sample of segments and scaled to all segments.\n");
+        sb.append("\nThe brute-force baseline of the tables is timed by the test-side benchmark bench.OutageBenchmark.\n");
         sb.append("CPU ratio: the same ratio in CPU time of the measuring thread (GC threads not counted).\n");
         return sb.toString();
     }

@@ -63,32 +63,27 @@ final class ChunkGrid {
         this.nx = (int) Math.floor(w / c) + 1;
         this.ny = (int) Math.floor(h / c) + 1;
         int cells = nx * ny;
-        int[] start = new int[cells + 1];
         int bigCount = 0;
-        for (int i = 0; i < count; i++) {
-            int cx0 = cx(minX[i]), cx1 = cx(maxX[i]), cy0 = cy(minY[i]), cy1 = cy(maxY[i]);
-            if (cx1 - cx0 >= BIG || cy1 - cy0 >= BIG) {
-                bigCount++;
-                continue;
-            }
-            for (int gy = cy0; gy <= cy1; gy++) for (int gx = cx0; gx <= cx1; gx++) start[gy * nx + gx + 1]++;
-        }
-        for (int k = 0; k < cells; k++) start[k + 1] += start[k];
-        int[] boxes = new int[start[cells]];
-        int[] fill = Arrays.copyOf(start, cells);
+        for (int i = 0; i < count; i++) if (isBig(i)) bigCount++;
         int[] bigs = new int[bigCount];
-        int b = 0;
-        for (int i = 0; i < count; i++) {
-            int cx0 = cx(minX[i]), cx1 = cx(maxX[i]), cy0 = cy(minY[i]), cy1 = cy(maxY[i]);
-            if (cx1 - cx0 >= BIG || cy1 - cy0 >= BIG) {
-                bigs[b++] = i;
-                continue;
+        for (int i = 0, b = 0; i < count; i++) if (isBig(i)) bigs[b++] = i;
+        Csr byCell = Csr.build(cells, sink -> {
+            for (int i = 0; i < count; i++) {
+                if (isBig(i)) continue;
+                int cx0 = cx(minX[i]), cx1 = cx(maxX[i]), cy0 = cy(minY[i]), cy1 = cy(maxY[i]);
+                for (int gy = cy0; gy <= cy1; gy++) for (int gx = cx0; gx <= cx1; gx++) sink.add(gy * nx + gx, i);
             }
-            for (int gy = cy0; gy <= cy1; gy++) for (int gx = cx0; gx <= cx1; gx++) boxes[fill[gy * nx + gx]++] = i;
-        }
+        });
+        int[] start = byCell.start();
+        int[] boxes = byCell.items();
         this.cellStart = start;
         this.cellBox = boxes;
         this.big = bigs;
+    }
+
+    /** A box spanning {@code BIG} cells or more in x or y: kept apart, tested on every query. */
+    private boolean isBig(int i) {
+        return cx(maxX[i]) - cx(minX[i]) >= BIG || cy(maxY[i]) - cy(minY[i]) >= BIG;
     }
 
     private int cx(double x) {

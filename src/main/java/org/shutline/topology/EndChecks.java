@@ -25,12 +25,11 @@ final class EndChecks {
                     Findings out, Progress progress) {
         LineSet lines = in.lines;
         int n = lines.count();
-        int[] featStart = new int[n + 1];
-        for (int i = 0; i < pa.featCount; i++) featStart[pa.featLine[i] + 1]++;
-        for (int l = 0; l < n; l++) featStart[l + 1] += featStart[l];
-        int[] feat = new int[pa.featCount];
-        int[] fill = java.util.Arrays.copyOf(featStart, n);
-        for (int i = 0; i < pa.featCount; i++) feat[fill[pa.featLine[i]]++] = i;
+        Csr byLine = Csr.build(n, sink -> {
+            for (int i = 0; i < pa.featCount; i++) sink.add(pa.featLine[i], i);
+        });
+        int[] featStart = byLine.start();
+        int[] feat = byLine.items();
         double r = tol.nearMiss();
         Hit own = new Hit();
         progress.begin("Checking main ends", n);

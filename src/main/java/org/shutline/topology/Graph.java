@@ -67,28 +67,18 @@ public final class Graph {
         edgeM0 = Arrays.copyOf(b.edgeM0, edgeCount);
         edgeM1 = Arrays.copyOf(b.edgeM1, edgeCount);
 
-        adjStart = new int[nodeCount + 1];
-        for (int e = 0; e < edgeCount; e++) {
-            adjStart[edgeFrom[e] + 1]++;
-            if (edgeTo[e] != edgeFrom[e]) adjStart[edgeTo[e] + 1]++;
-        }
-        for (int v = 0; v < nodeCount; v++) adjStart[v + 1] += adjStart[v];
-        adjEdge = new int[adjStart[nodeCount]];
-        int[] fill = Arrays.copyOf(adjStart, nodeCount);
-        for (int e = 0; e < edgeCount; e++) {
-            adjEdge[fill[edgeFrom[e]]++] = e;
-            if (edgeTo[e] != edgeFrom[e]) adjEdge[fill[edgeTo[e]]++] = e;
-        }
+        Csr adj = Csr.incidence(nodeCount, edgeFrom, edgeTo, edgeCount);
+        adjStart = adj.start();
+        adjEdge = adj.items();
 
         int mains = b.mainSystem.length;
         mainSystem = b.mainSystem.clone();
         systemIds = b.systemIds.clone();
-        mainEdgeStart = new int[mains + 1];
-        for (int e = 0; e < edgeCount; e++) if (edgeKind[e] == EdgeKind.PIPE) mainEdgeStart[edgeFeature[e] + 1]++;
-        for (int i = 0; i < mains; i++) mainEdgeStart[i + 1] += mainEdgeStart[i];
-        mainEdges = new int[mainEdgeStart[mains]];
-        int[] mf = Arrays.copyOf(mainEdgeStart, mains);
-        for (int e = 0; e < edgeCount; e++) if (edgeKind[e] == EdgeKind.PIPE) mainEdges[mf[edgeFeature[e]]++] = e;
+        Csr byMain = Csr.build(mains, sink -> {
+            for (int e = 0; e < edgeCount; e++) if (edgeKind[e] == EdgeKind.PIPE) sink.add(edgeFeature[e], e);
+        });
+        mainEdgeStart = byMain.start();
+        mainEdges = byMain.items();
         for (int i = 0; i < mains; i++) sortMainEdges(mainEdgeStart[i], mainEdgeStart[i + 1]);
 
         valveEdge = b.valveEdge.clone();

@@ -95,12 +95,11 @@ final class GraphAssembly {
 
     void run(Progress progress) {
         int total = cuts();
-        int[] start = new int[n + 1];
-        for (int c = 0; c < total; c++) start[lineOf(c) + 1]++;
-        for (int l = 0; l < n; l++) start[l + 1] += start[l];
-        int[] order = new int[total];
-        int[] fill = Arrays.copyOf(start, n);
-        for (int c = 0; c < total; c++) order[fill[lineOf(c)]++] = c;
+        Csr byLine = Csr.build(n, sink -> {
+            for (int c = 0; c < total; c++) sink.add(lineOf(c), c);
+        });
+        int[] start = byLine.start();
+        int[] order = byLine.items();
         for (int l = 0; l < n; l++) sort(order, start[l], start[l + 1]);
         // all junctions at one measure of one line are one node
         for (int l = 0; l < n; l++) {

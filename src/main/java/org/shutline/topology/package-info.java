@@ -4,6 +4,8 @@
  * features and services, and the connectivity findings for GIS staff. The entry point
  * is {@link org.shutline.topology.NetworkBuilder}; the rules, the choices made where
  * they are open, and every finding code are in docs/connectivity.md.
+ * {@link org.shutline.topology.Csr} builds every compressed adjacency or grouping array
+ * of the engine (here, in trace and in analysis).
  * No Swing or AWT.
  */
 package org.shutline.topology;

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.Progress;
-import org.shutline.model.Service;
 import org.shutline.topology.EdgeKind;
 
 /**
@@ -83,6 +82,8 @@ public final class FeedTrace {
         public boolean isFed(int service) { return fedServices.get(service); }
         public boolean isEdgeLive(int edge) { return liveEdges.get(edge); }
         public boolean isMultiFed(int service) { return multiFed.get(service); }
+        /** Whether station {@code st} of state s passes gas in this trace ({@link Passage#stationPasses}: in service, inlet live). */
+        public boolean stationPasses(NetworkState s, int st) { return Passage.stationPasses(s, st, liveNodes); }
         public boolean isDeadMain(int main) { return deadMains.get(main); }
         public int stationCount() { return stationServices.size(); }
         public BitSet servicesFedThrough(int station) { return (BitSet) stationServices.get(station).clone(); }
@@ -149,88 +150,11 @@ public final class FeedTrace {
         return StationAttribution.run(segments, progress);
     }
 
-    /**
-     * The same result by two searches of the whole node graph per live station (the
-     * plain method, O(stations x (nodes + edges))); kept as the reference the tests
-     * compare {@link #run} against.
-     */
-    static Result runByNodeSearch(NetworkState s, Progress progress) {
-        progress.begin("feed trace", s.stationCount() * 2L + 1);
-        Flow flow = new Flow(s, progress);
-        int[] sources = flow.sourceNodes();
-        BitSet live = flow.reach(sources, -1);
-        BitSet fed = flow.fedServices(live);
-        BitSet liveEdges = liveEdges(s, flow, live, s.edgeCount());
-        List<Service> services = s.network().services();
-        int nst = s.stationCount();
-        List<BitSet> stServices = new ArrayList<>(nst);
-        List<BitSet> stExclusive = new ArrayList<>(nst);
-        List<BitSet> stEdges = new ArrayList<>(nst);
-        long[] stMeters = new long[nst];
-        long[] stExMeters = new long[nst];
-        int[] lastStageFeeds = new int[s.serviceCount()];
-        for (int st = 0; st < nst; st++) {
-            int e = s.stationEdge(st);
-            boolean on = e >= 0 && !s.isRemoved(e) && s.stationInService(st) && live.get(s.edgeFrom(e));
-            if (!on) {
-                stServices.add(new BitSet());
-                stExclusive.add(new BitSet());
-                stEdges.add(new BitSet());
-                continue;
-            }
-            BitSet reach = flow.reach(new int[] {s.edgeTo(e)}, -1);
-            BitSet through = flow.fedServices(reach);
-            through.and(fed);
-            stServices.add(through);
-            stEdges.add(liveEdges(s, flow, reach, s.edgeCount()));
-            BitSet without = flow.fedServices(flow.reach(sources, st));
-            BitSet exclusive = (BitSet) fed.clone();
-            exclusive.andNot(without);
-            stExclusive.add(exclusive);
-            stMeters[st] = meters(services, through);
-            stExMeters[st] = meters(services, exclusive);
-            int outSys = s.graph().systemIndex(s.network().stations().get(st).outSys());
-            for (int i = through.nextSetBit(0); i >= 0; i = through.nextSetBit(i + 1)) {
-                if (serviceSystem(s, i) == outSys) lastStageFeeds[i]++;
-            }
-            progress.done(2L * st + 3);
-        }
-        BitSet multi = new BitSet(s.serviceCount());
-        for (int i = 0; i < lastStageFeeds.length; i++) if (lastStageFeeds[i] >= 2) multi.set(i);
-        BitSet unfed = new BitSet(s.serviceCount());
-        unfed.set(0, s.serviceCount());
-        unfed.andNot(fed);
-        return new Result(live, fed, liveEdges, stServices, stExclusive, stEdges, stMeters, stExMeters, multi,
-                unfed, deadMains(s, liveEdges), meters(services, fed));
-    }
-
-    private static BitSet liveEdges(NetworkState s, Flow flow, BitSet live, int m) {
-        BitSet out = new BitSet(m);
-        for (int e = 0; e < m; e++) {
-            if (s.edgeKind(e) == EdgeKind.PIPE && !s.isRemoved(e) && flow.mainActive(s.edgeFeature(e))
-                    && live.get(s.edgeFrom(e))) {
-                out.set(e);
-            }
-        }
-        return out;
-    }
-
     static BitSet deadMains(NetworkState s, BitSet liveEdges) {
         BitSet hasLive = new BitSet(s.mainCount());
         for (int e = liveEdges.nextSetBit(0); e >= 0; e = liveEdges.nextSetBit(e + 1)) hasLive.set(s.edgeFeature(e));
         BitSet dead = new BitSet(s.mainCount());
         for (int i = 0; i < s.mainCount(); i++) if (s.mainActive(i) && !hasLive.get(i)) dead.set(i);
         return dead;
-    }
-
-    private static int serviceSystem(NetworkState s, int service) {
-        int e = s.serviceEdge(service);
-        return e < 0 ? -2 : s.mainSystem(s.edgeFeature(e));
-    }
-
-    static long meters(List<Service> services, BitSet set) {
-        long m = 0;
-        for (int i = set.nextSetBit(0); i >= 0; i = set.nextSetBit(i + 1)) m += services.get(i).meters();
-        return m;
     }
 }

@@ -1,22 +1,19 @@
 package org.shutline.trace;
 
 import java.util.BitSet;
-import org.shutline.model.MainStatus;
 import org.shutline.model.Progress;
 import org.shutline.topology.EdgeKind;
 import org.shutline.topology.Graph;
 
 /**
- * Breadth-first gas flow over one {@link NetworkState}: through pipe edges of active
- * mains, open valves, and in-service stations from inlet to outlet only. The state's
- * flags are read once into arrays; the queue and adjacency buffer are reused, so one
+ * Breadth-first gas flow over one {@link NetworkState} by the {@link Passage} rule:
+ * through pipe edges of active mains, open valves, and in-service stations from inlet to
+ * outlet only. The state's flags are read once ({@link Passage#of}); the queue and adjacency buffer are reused, so one
  * flow costs O(nodes + edges) and allocates only its result BitSet.
  */
 final class Flow {
     private final NetworkState s;
-    private final boolean[] mainActive;
-    private final BitSet closed;
-    private final boolean[] stationOn;
+    private final Passage passage;
     private final int[] queue;
     private final int[] buf;
     private final Progress progress;
@@ -24,32 +21,18 @@ final class Flow {
     Flow(NetworkState s, Progress progress) {
         this.s = s;
         this.progress = progress;
-        byte[] st = s.mainStatusOrdinals();
-        mainActive = new boolean[st.length];
-        for (int i = 0; i < st.length; i++) mainActive[i] = st[i] == MainStatus.ACTIVE.ordinal();
-        closed = s.closedValves();
-        stationOn = new boolean[s.stationCount()];
-        for (int i = 0; i < stationOn.length; i++) stationOn[i] = s.stationInService(i);
+        passage = Passage.of(s);
         queue = new int[Math.max(1, s.nodeCount())];
         buf = s.adjacencyBuffer();
     }
 
     boolean mainActive(int main) {
-        return mainActive[main];
+        return passage.mainActive(main);
     }
 
-    /** True when gas can pass edge e starting at node v (e not removed). */
+    /** True when gas can pass edge e starting at node v ({@link Passage}). */
     boolean passes(int e, int v) {
-        switch (s.edgeKind(e)) {
-            case EdgeKind.PIPE:
-                return mainActive[s.edgeFeature(e)];
-            case EdgeKind.VALVE:
-                return !closed.get(s.edgeFeature(e));
-            case EdgeKind.STATION:
-                return stationOn[s.edgeFeature(e)] && s.edgeFrom(e) == v && s.edgeTo(e) != v;
-            default:
-                return false;
-        }
+        return passage.passes(e, v);
     }
 
     /**
@@ -114,10 +97,9 @@ final class Flow {
                 if (seen[w]) continue;
                 int f = (int) (c >>> 34);
                 int code = (int) (c >>> 32) & 3;
-                boolean pass;
-                if (code == NetworkState.FLOW_PIPE) pass = mainActive[f];
-                else if (code == NetworkState.FLOW_VALVE) pass = !closed.get(f);
-                else pass = code == NetworkState.FLOW_STATION_OUT && stationOn[f] && f != blockedStation;
+                // the direction part of the rule is in the code (a station only from its inlet); the open part here
+                boolean pass = code != NetworkState.FLOW_NONE && passage.isOpen(NetworkState.FLOW_KIND[code], f)
+                        && (code != NetworkState.FLOW_STATION_OUT || f != blockedStation);
                 if (pass) {
                     seen[w] = true;
                     queue[tail++] = w;
@@ -151,19 +133,9 @@ final class Flow {
                 int e = g.adjEdge(i);
                 int f = g.edgeFeature(e);
                 byte k = g.edgeKind(e);
-                int w;
-                if (k == EdgeKind.PIPE) {
-                    if (!mainActive[f]) continue;
-                    w = g.opposite(e, v);
-                } else if (k == EdgeKind.VALVE) {
-                    if (closed.get(f)) continue;
-                    w = g.opposite(e, v);
-                } else if (k == EdgeKind.STATION) {
-                    w = g.edgeTo(e);
-                    if (!stationOn[f] || g.edgeFrom(e) != v || w == v || f == blockedStation) continue;
-                } else {
-                    continue;
-                }
+                if (!Passage.passes(k, passage.isOpen(k, f), g.edgeFrom(e), g.edgeTo(e), v)) continue;
+                if (k == EdgeKind.STATION && f == blockedStation) continue;
+                int w = g.opposite(e, v);
                 if (!seen.get(w)) {
                     seen.set(w);
                     queue[tail++] = w;
@@ -180,14 +152,14 @@ final class Flow {
             Graph g = s.graph();
             for (int i = 0, n = g.serviceCount(); i < n; i++) {
                 int e = g.serviceEdge(i);
-                if (e >= 0 && g.edgeKind(e) == EdgeKind.PIPE && mainActive[g.edgeFeature(e)] && live.get(g.edgeFrom(e))) fed.set(i);
+                if (e >= 0 && g.edgeKind(e) == EdgeKind.PIPE && passage.mainActive(g.edgeFeature(e)) && live.get(g.edgeFrom(e))) fed.set(i);
             }
             return fed;
         }
         for (int i = 0; i < s.serviceCount(); i++) {
             int e = s.serviceEdge(i);
             if (e < 0 || s.isRemoved(e) || s.edgeKind(e) != EdgeKind.PIPE) continue;
-            if (mainActive[s.edgeFeature(e)] && live.get(s.edgeFrom(e))) fed.set(i);
+            if (passage.mainActive(s.edgeFeature(e)) && live.get(s.edgeFrom(e))) fed.set(i);
         }
         return fed;
     }

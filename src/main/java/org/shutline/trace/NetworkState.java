@@ -82,6 +82,8 @@ public final class NetworkState {
     /** Largest feature index the packed adjacency holds (30 bits). */
     static final int FLOW_FEATURE_LIMIT = 1 << 30;
     static final int FLOW_PIPE = 0, FLOW_VALVE = 1, FLOW_STATION_OUT = 2, FLOW_NONE = 3;
+    /** The edge kind of each flow code ({@link #FLOW_NONE}: none, never passes). */
+    static final byte[] FLOW_KIND = {EdgeKind.PIPE, EdgeKind.VALVE, EdgeKind.STATION, -1};
 
     private static long[] buildFlowAdjacency(Graph g) {
         int total = g.nodeCount() == 0 ? 0 : g.adjEnd(g.nodeCount() - 1);
@@ -90,13 +92,12 @@ public final class NetworkState {
             for (int i = g.adjStart(v), end = g.adjEnd(v); i < end; i++) {
                 int e = g.adjEdge(i);
                 int f = g.edgeFeature(e);
+                byte kind = g.edgeKind(e);
                 int code;
-                switch (g.edgeKind(e)) {
-                    case EdgeKind.PIPE -> code = FLOW_PIPE;
-                    case EdgeKind.VALVE -> code = FLOW_VALVE;
-                    case EdgeKind.STATION -> code = g.edgeFrom(e) == v && g.edgeTo(e) != v ? FLOW_STATION_OUT : FLOW_NONE;
-                    default -> code = FLOW_NONE;
-                }
+                if (!Passage.entersFrom(kind, g.edgeFrom(e), g.edgeTo(e), v)) code = FLOW_NONE;
+                else if (kind == EdgeKind.PIPE) code = FLOW_PIPE;
+                else if (kind == EdgeKind.VALVE) code = FLOW_VALVE;
+                else code = FLOW_STATION_OUT;
                 if (f < 0 || f >= FLOW_FEATURE_LIMIT) return null;
                 a[i] = ((long) f << 34) | ((long) code << 32) | (g.opposite(e, v) & 0xFFFFFFFFL);
             }
@@ -108,7 +109,8 @@ public final class NetworkState {
      * The base graph's adjacency packed for gas flow, one long per CSR entry of
      * {@link Graph#adjEdge} (same order): bits 0-31 the node across the edge, bits 32-33
      * {@link #FLOW_PIPE}, {@link #FLOW_VALVE}, {@link #FLOW_STATION_OUT} (a station edge
-     * seen from its inlet, the only way gas passes it) or {@link #FLOW_NONE}, bits 34-63 the
+     * seen from its inlet, the only way gas passes it) or {@link #FLOW_NONE} (no gas enters
+     * the edge at this node by {@link Passage#entersFrom}), bits 34-63 the
      * edge's feature (main, valve or station index). Built once per base, O(edges), and
      * shared by every state; null when a feature index does not fit in 30 bits. A search
      * then reads one sequential array per node instead of four edge arrays at random.
@@ -319,7 +321,7 @@ public final class NetworkState {
 
     /** True when pipe edge e carries gas in this state: present and its main active. */
     public boolean pipeLive(int e) {
-        return edgeKind(e) == EdgeKind.PIPE && !isRemoved(e) && mainActive(edgeFeature(e));
+        return edgeKind(e) == EdgeKind.PIPE && Passage.passesBothWays(this, e);
     }
 
     // ---- valves ----

@@ -3,6 +3,7 @@ package org.shutline.trace;
 import java.util.Arrays;
 import java.util.BitSet;
 import org.shutline.model.Operability;
+import org.shutline.topology.Csr;
 import org.shutline.topology.EdgeKind;
 
 /**
@@ -13,7 +14,7 @@ import org.shutline.topology.EdgeKind;
  *
  * <p>Links carry the state's facts: {@link #isOpen} (valve open, or station in service),
  * the valve's operability. {@link #canFlow} answers whether gas passes a link leaving a
- * given segment. Adjacency is CSR over int arrays: each valve link is listed at both its
+ * given segment, by the one rule of {@link Passage}. Adjacency is CSR over int arrays: each valve link is listed at both its
  * segments (once when both sides are the same segment), each station link likewise (the
  * direction is tested with {@link #canFlow}).
  *
@@ -55,7 +56,8 @@ public final class SegmentGraph {
             int l = valveLink[v];
             if (l < 0) continue;
             int e = s.valveEdge(v);
-            set(l, EdgeKind.VALVE, v, seg.nodeSegment(s.edgeFrom(e)), seg.nodeSegment(s.edgeTo(e)), !s.valveClosed(v));
+            set(l, EdgeKind.VALVE, v, seg.nodeSegment(s.edgeFrom(e)), seg.nodeSegment(s.edgeTo(e)),
+                    Passage.isOpen(s, EdgeKind.VALVE, v));
             linkOperability[l] = (byte) s.valveOperability(v).ordinal();
         }
         for (int st = 0; st < ns; st++) {
@@ -63,31 +65,19 @@ public final class SegmentGraph {
             if (l < 0) continue;
             int e = s.stationEdge(st);
             set(l, EdgeKind.STATION, st, seg.nodeSegment(s.edgeFrom(e)), seg.nodeSegment(s.edgeTo(e)),
-                    s.stationInService(st));
+                    Passage.isOpen(s, EdgeKind.STATION, st));
             linkOperability[l] = (byte) Operability.YES.ordinal();
         }
-        adjStart = new int[segmentCount + 1];
-        for (int l = 0; l < links; l++) {
-            adjStart[linkA[l] + 1]++;
-            if (linkB[l] != linkA[l]) adjStart[linkB[l] + 1]++;
-        }
-        for (int i = 0; i < segmentCount; i++) adjStart[i + 1] += adjStart[i];
-        adjLink = new int[adjStart[segmentCount]];
-        int[] fill = Arrays.copyOf(adjStart, segmentCount);
-        for (int l = 0; l < links; l++) {
-            adjLink[fill[linkA[l]]++] = l;
-            if (linkB[l] != linkA[l]) adjLink[fill[linkB[l]]++] = l;
-        }
-        crossStart = new int[segmentCount + 1];
-        for (int u = 0; u < segmentCount; u++) {
-            int c = 0;
-            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) c++;
-            crossStart[u + 1] = crossStart[u] + c;
-        }
-        crossLink = new int[crossStart[segmentCount]];
-        for (int u = 0, k = 0; u < segmentCount; u++) {
-            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) crossLink[k++] = adjLink[i];
-        }
+        Csr adj = Csr.incidence(segmentCount, linkA, linkB, links);
+        adjStart = adj.start();
+        adjLink = adj.items();
+        Csr cross = Csr.build(segmentCount, sink -> {
+            for (int u = 0; u < segmentCount; u++) {
+                for (int i = adjStart[u]; i < adjStart[u + 1]; i++) if (linkA[adjLink[i]] != linkB[adjLink[i]]) sink.add(u, adjLink[i]);
+            }
+        });
+        crossStart = cross.start();
+        crossLink = cross.items();
         sourceSegment = new int[s.sourceCount()];
         sourceSegments = new BitSet(segmentCount);
         for (int i = 0; i < sourceSegment.length; i++) {
@@ -131,10 +121,23 @@ public final class SegmentGraph {
         return linkKind[l] == EdgeKind.VALVE && linkOpen[l] && linkOperability[l] == Operability.NO.ordinal();
     }
 
-    /** Whether gas passes link l leaving segment {@code from}: open valve, or in-service station from its inlet. */
+    /**
+     * Whether gas passes link l leaving segment {@code from} by the {@link Passage} rule:
+     * open valve, or in-service station from its inlet segment to another segment.
+     */
     public boolean canFlow(int l, int from) {
-        if (!linkOpen[l]) return false;
-        return linkKind[l] == EdgeKind.VALVE || (linkA[l] == from && linkB[l] != from);
+        return Passage.passes(linkKind[l], linkOpen[l], linkA[l], linkB[l], from);
+    }
+
+    /**
+     * Whether station link l feeds {@code region} straight in: gas passes it
+     * ({@link #canFlow} from its inlet) from an inlet segment outside the region that is
+     * in {@code fed} to an outlet segment inside it. False for valve links and for -1.
+     */
+    public boolean feedsInto(int l, BitSet region, BitSet fed) {
+        if (l < 0 || linkKind[l] != EdgeKind.STATION) return false;
+        int a = linkA[l], b = linkB[l];
+        return canFlow(l, a) && region.get(b) && !region.get(a) && fed.get(a);
     }
 
     public int adjStart(int seg) { return adjStart[seg]; }
@@ -177,7 +180,7 @@ public final class SegmentGraph {
      * {@code blockedLinks} (may be null). O(segments + links).
      */
     public BitSet reachFromSources(BitSet blocked, BitSet blockedLinks) {
-        return reach(blocked, blockedLinks, null);
+        return reach(blocked, blockedLinks, null, null);
     }
 
     /**
@@ -186,16 +189,24 @@ public final class SegmentGraph {
      * {@code stoppedStations} (station indices; may be null). O(segments + links).
      */
     public BitSet reachFromSourcesStopping(BitSet blocked, BitSet stoppedStations) {
-        return reach(blocked, null, stoppedStations);
+        return reach(blocked, null, stoppedStations, null);
     }
 
-    /** The breadth-first search behind both: links in {@code blockedLinks} and stations in {@code stoppedStations} are not crossed. */
-    private BitSet reach(BitSet blocked, BitSet blockedLinks, BitSet stoppedStations) {
+    /**
+     * The search behind the others, every restriction optional (null for none): gas
+     * starts at the segments of the sources not in {@code shutSources} (source indices),
+     * flows by {@link #canFlow}, never enters a segment in {@code blocked}, never crosses
+     * a link in {@code blockedLinks} nor a station in {@code stoppedStations} (station
+     * indices). Breadth-first over the links between two different segments,
+     * O(segments + links).
+     */
+    public BitSet reach(BitSet blocked, BitSet blockedLinks, BitSet stoppedStations, BitSet shutSources) {
         BitSet seen = new BitSet(segmentCount);
         int[] queue = new int[Math.max(1, segmentCount)];
         int head = 0, tail = 0;
-        for (int seg : sourceSegment) {
-            if (seg >= 0 && !seen.get(seg) && (blocked == null || !blocked.get(seg))) {
+        for (int i = 0; i < sourceSegment.length; i++) {
+            int seg = sourceSegment[i];
+            if (seg >= 0 && !seen.get(seg) && (blocked == null || !blocked.get(seg)) && (shutSources == null || !shutSources.get(i))) {
                 seen.set(seg);
                 queue[tail++] = seg;
             }
@@ -213,5 +224,36 @@ public final class SegmentGraph {
             }
         }
         return seen;
+    }
+
+    /**
+     * Breadth-first hop counts from the source segments, gas flowing by {@link #canFlow}
+     * before any closing ({@link Integer#MAX_VALUE} for a segment not reached); a fresh
+     * array. O(segments + links).
+     */
+    public int[] hopsFromSources() {
+        int[] d = new int[segmentCount];
+        Arrays.fill(d, Integer.MAX_VALUE);
+        int[] queue = new int[Math.max(1, segmentCount)];
+        int head = 0, tail = 0;
+        for (int seg : sourceSegment) {
+            if (seg >= 0 && d[seg] != 0) {
+                d[seg] = 0;
+                queue[tail++] = seg;
+            }
+        }
+        while (head < tail) {
+            int u = queue[head++];
+            for (int i = adjStart[u]; i < adjStart[u + 1]; i++) {
+                int l = adjLink[i];
+                if (!canFlow(l, u)) continue;
+                int w = other(l, u);
+                if (d[w] == Integer.MAX_VALUE) {
+                    d[w] = d[u] + 1;
+                    queue[tail++] = w;
+                }
+            }
+        }
+        return d;
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.Progress;
+import org.shutline.topology.Csr;
 
 /**
  * The feed trace of {@link FeedTrace#run} computed on the valve-segment graph
@@ -41,7 +42,7 @@ final class StationAttribution {
         SegmentGraph sg = vs.graph();
         int nseg = vs.segmentCount();
         progress.done(1);
-        int[][] edgeCsr = ValveSegments.csr(edgeSegments(vs, s.edgeCount()), nseg);
+        Csr edgeCsr = Csr.group(edgeSegments(vs, s.edgeCount()), nseg);
         int[] segSys = segmentSystems(s, vs, edgeCsr);
         BitSet reachedAll = sg.reachFromSources(null, null);
         BitSet live = new BitSet(s.nodeCount());
@@ -49,7 +50,7 @@ final class StationAttribution {
             int seg = vs.nodeSegment(v);
             if (seg >= 0 && reachedAll.get(seg)) live.set(v);
         }
-        BitSet fed = services(vs, reachedAll, s.serviceCount());
+        BitSet fed = vs.servicesOf(reachedAll);
         BitSet liveEdges = edges(edgeCsr, reachedAll, s.edgeCount());
         int nst = s.stationCount();
         List<BitSet> stServices = new ArrayList<>(nst);
@@ -63,7 +64,7 @@ final class StationAttribution {
         for (int st = 0; st < nst; st++) {
             progress.checkCancelled();
             int e = s.stationEdge(st);
-            boolean on = e >= 0 && !s.isRemoved(e) && s.stationInService(st) && live.get(s.edgeFrom(e));
+            boolean on = Passage.stationPasses(s, st, live);
             if (!on) {
                 stServices.add(new BitSet());
                 stExclusive.add(new BitSet());
@@ -71,15 +72,15 @@ final class StationAttribution {
                 continue;
             }
             BitSet reach = reachFrom(sg, vs.nodeSegment(s.edgeTo(e)), queue);
-            BitSet through = services(vs, reach, s.serviceCount());
+            BitSet through = vs.servicesOf(reach);
             through.and(fed);
             stServices.add(through);
             stEdges.add(edges(edgeCsr, reach, s.edgeCount()));
             BitSet lostSegs = lostWithout(sg, reach, reachedAll, sg.stationLink(st), queue);
-            BitSet exclusive = services(vs, lostSegs, s.serviceCount());
+            BitSet exclusive = vs.servicesOf(lostSegs);
             stExclusive.add(exclusive);
-            stMeters[st] = meters(vs, reach);
-            stExMeters[st] = meters(vs, lostSegs);
+            stMeters[st] = vs.metersOf(reach);
+            stExMeters[st] = vs.metersOf(lostSegs);
             int outSys = s.graph().systemIndex(s.network().stations().get(st).outSys());
             for (int seg = reach.nextSetBit(0); seg >= 0; seg = reach.nextSetBit(seg + 1)) {
                 if (segSys[seg] >= 0 || segSys[seg] == -1) {
@@ -107,7 +108,7 @@ final class StationAttribution {
         unfed.set(0, s.serviceCount());
         unfed.andNot(fed);
         return new FeedTrace.Result(live, fed, liveEdges, stServices, stExclusive, stEdges, stMeters, stExMeters,
-                multi, unfed, FeedTrace.deadMains(s, liveEdges), meters(vs, reachedAll));
+                multi, unfed, FeedTrace.deadMains(s, liveEdges), vs.metersOf(reachedAll));
     }
 
     private static int[] edgeSegments(ValveSegments vs, int m) {
@@ -121,11 +122,11 @@ final class StationAttribution {
      * service on it then has that system); -1 for a segment with no pipe (no services);
      * -2 when mixed.
      */
-    private static int[] segmentSystems(NetworkState s, ValveSegments vs, int[][] edgeCsr) {
+    private static int[] segmentSystems(NetworkState s, ValveSegments vs, Csr edgeCsr) {
         int n = vs.segmentCount();
         int[] sys = new int[n];
-        int[] start = edgeCsr[0];
-        int[] list = edgeCsr[1];
+        int[] start = edgeCsr.start();
+        int[] list = edgeCsr.items();
         for (int seg = 0; seg < n; seg++) {
             int v = -1;
             for (int i = start[seg]; i < start[seg + 1]; i++) {
@@ -208,28 +209,14 @@ final class StationAttribution {
         return seen;
     }
 
-    private static BitSet services(ValveSegments vs, BitSet segs, int n) {
-        BitSet out = new BitSet(n);
-        for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) {
-            for (int i = vs.serviceStart(seg); i < vs.serviceEnd(seg); i++) out.set(vs.serviceAt(i));
-        }
-        return out;
-    }
-
-    private static BitSet edges(int[][] csr, BitSet segs, int m) {
+    private static BitSet edges(Csr csr, BitSet segs, int m) {
         BitSet out = new BitSet(m);
-        int[] start = csr[0];
-        int[] list = csr[1];
+        int[] start = csr.start();
+        int[] list = csr.items();
         for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) {
             for (int i = start[seg]; i < start[seg + 1]; i++) out.set(list[i]);
         }
         return out;
-    }
-
-    private static long meters(ValveSegments vs, BitSet segs) {
-        long m = 0;
-        for (int seg = segs.nextSetBit(0); seg >= 0; seg = segs.nextSetBit(seg + 1)) m += vs.meters(seg);
-        return m;
     }
 
     private static int serviceSystem(NetworkState s, int service) {

@@ -1,9 +1,11 @@
 package org.shutline.trace;
 
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.List;
 import org.shutline.model.Progress;
 import org.shutline.model.Service;
+import org.shutline.topology.Csr;
 import org.shutline.topology.EdgeKind;
 
 /**
@@ -42,16 +44,16 @@ public final class ValveSegments {
     private final SegmentGraph graph;
 
     private ValveSegments(NetworkState state, int count, int[] nodeSegment, int[] edgeSegment, int[] serviceSegment,
-                          int[][] mains, int[][] services, long[] meters) {
+                          Csr mains, Csr services, long[] meters) {
         this.state = state;
         this.count = count;
         this.nodeSegment = nodeSegment;
         this.edgeSegment = edgeSegment;
         this.serviceSegment = serviceSegment;
-        this.mainStart = mains[0];
-        this.mainList = mains[1];
-        this.serviceStart = services[0];
-        this.serviceList = services[1];
+        this.mainStart = mains.start();
+        this.mainList = mains.items();
+        this.serviceStart = services.start();
+        this.serviceList = services.items();
         this.meters = meters;
         this.graph = new SegmentGraph(state, this);
     }
@@ -64,7 +66,7 @@ public final class ValveSegments {
         int n = s.nodeCount(), m = s.edgeCount();
         progress.begin("valve segments", n);
         boolean[] active = new boolean[s.mainCount()];
-        for (int i = 0; i < active.length; i++) active[i] = s.mainActive(i);
+        for (int i = 0; i < active.length; i++) active[i] = Passage.isOpen(s, EdgeKind.PIPE, i); // pipe joins a segment when gas passes it
         boolean[] wanted = new boolean[n];
         for (int e = 0; e < m; e++) {
             if (s.isRemoved(e)) continue;
@@ -119,41 +121,23 @@ public final class ValveSegments {
             serviceSeg[i] = e < 0 ? -1 : edgeSeg[e];
             if (serviceSeg[i] >= 0) meters[serviceSeg[i]] += services.get(i).meters();
         }
-        int[][] mainsCsr = mainsBySegment(s, edgeSeg, segs);
-        int[][] servicesCsr = csr(serviceSeg, segs);
+        Csr mainsCsr = mainsBySegment(s, edgeSeg, segs);
+        Csr servicesCsr = Csr.group(serviceSeg, segs);
         return new ValveSegments(s, segs, nodeSeg, edgeSeg, serviceSeg, mainsCsr, servicesCsr, meters);
     }
 
-    /** CSR of the distinct mains per segment (a main may span several segments). */
-    private static int[][] mainsBySegment(NetworkState s, int[] edgeSeg, int segs) {
-        int[] start = new int[segs + 1];
+    /** CSR of the distinct mains per segment (a main may span several segments), mains ascending. */
+    private static Csr mainsBySegment(NetworkState s, int[] edgeSeg, int segs) {
         long[] pairs = new long[edgeSeg.length];
         int c = 0;
         for (int e = 0; e < edgeSeg.length; e++) {
             if (edgeSeg[e] >= 0) pairs[c++] = ((long) edgeSeg[e] << 32) | s.edgeFeature(e);
         }
         Arrays.sort(pairs, 0, c);
-        int[] list = new int[c];
-        int k = 0;
-        for (int i = 0; i < c; i++) {
-            if (i > 0 && pairs[i] == pairs[i - 1]) continue;
-            int seg = (int) (pairs[i] >>> 32);
-            list[k++] = (int) pairs[i];
-            start[seg + 1]++;
-        }
-        for (int i = 0; i < segs; i++) start[i + 1] += start[i];
-        return new int[][] {start, Arrays.copyOf(list, k)};
-    }
-
-    /** CSR grouping of items by their group (items with group -1 left out), items in index order. */
-    static int[][] csr(int[] groupOf, int groups) {
-        int[] start = new int[groups + 1];
-        for (int g : groupOf) if (g >= 0) start[g + 1]++;
-        for (int i = 0; i < groups; i++) start[i + 1] += start[i];
-        int[] list = new int[start[groups]];
-        int[] fill = Arrays.copyOf(start, groups);
-        for (int i = 0; i < groupOf.length; i++) if (groupOf[i] >= 0) list[fill[groupOf[i]]++] = i;
-        return new int[][] {start, list};
+        int n = c;
+        return Csr.build(segs, sink -> {
+            for (int i = 0; i < n; i++) if (i == 0 || pairs[i] != pairs[i - 1]) sink.add((int) (pairs[i] >>> 32), (int) pairs[i]);
+        });
     }
 
     public NetworkState state() { return state; }
@@ -176,6 +160,46 @@ public final class ValveSegments {
     public int serviceEnd(int seg) { return serviceStart[seg + 1]; }
     /** The i-th entry of the services-by-segment list (use with {@link #serviceStart}/{@link #serviceEnd}); no copy. */
     public int serviceAt(int i) { return serviceList[i]; }
+    /**
+     * The services of a set of segments (every service lies in at most one segment), a
+     * fresh set: from the per-segment lists, or, for more than half of the segments, from
+     * every service in a segment minus those of the others; O(services reported) either way.
+     */
+    public BitSet servicesOf(BitSet segments) {
+        if (segments.cardinality() * 2 > count) {
+            BitSet out = inSegment();
+            for (int seg = segments.nextClearBit(0); seg < count; seg = segments.nextClearBit(seg + 1)) {
+                for (int i = serviceStart[seg]; i < serviceStart[seg + 1]; i++) out.clear(serviceList[i]);
+            }
+            return out;
+        }
+        BitSet out = new BitSet(); // grows to the highest service set: few words for a small set
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) {
+            for (int i = serviceStart[seg]; i < serviceStart[seg + 1]; i++) out.set(serviceList[i]);
+        }
+        return out;
+    }
+
+    /** The meters of a set of segments, from the per-segment sums. */
+    public long metersOf(BitSet segments) {
+        long m = 0;
+        for (int seg = segments.nextSetBit(0); seg >= 0; seg = segments.nextSetBit(seg + 1)) m += meters[seg];
+        return m;
+    }
+
+    /** Services that lie in a segment; built on first use and shared (a copy is returned). */
+    private volatile BitSet inSegment;
+
+    private BitSet inSegment() {
+        BitSet b = inSegment;
+        if (b == null) {
+            b = new BitSet(serviceSegment.length);
+            for (int i = 0; i < serviceSegment.length; i++) if (serviceSegment[i] >= 0) b.set(i);
+            inSegment = b;
+        }
+        return (BitSet) b.clone();
+    }
+
     /** True for a segment with no active pipe (see class comment). */
     public boolean isEmpty(int seg) { return mainCount(seg) == 0; }
     /** Valves (state indices) on the boundary of a segment. */

@@ -4,7 +4,9 @@
  * additions and re-attachments), {@link org.shutline.trace.FeedTrace} (what is live and
  * which station feeds whom), {@link org.shutline.trace.StationSheds} (their areas),
  * {@link org.shutline.trace.ValveSegments} and {@link org.shutline.trace.SegmentGraph}
- * (the basis of every isolation). Int arrays and BitSets on every traversal; no
+ * (the basis of every isolation), and {@link org.shutline.trace.Passage}, the one rule
+ * of where gas passes that every search here and in the analyses follows. Int arrays
+ * and BitSets on every traversal; no
  * recursion. Imports model and topology only. No Swing or AWT.
  */
 package org.shutline.trace;

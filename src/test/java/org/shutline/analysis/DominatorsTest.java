@@ -7,18 +7,17 @@ import java.util.BitSet;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
+import org.shutline.topology.Csr;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 class DominatorsTest {
 
     private static Dominators of(int n, int[][] arcs) {
-        int[] from = new int[arcs.length];
-        for (int i = 0; i < arcs.length; i++) from[i] = arcs[i][0];
-        int[][] g = Csr.group(from, n);
-        int[] succ = new int[arcs.length];
-        for (int i = 0; i < arcs.length; i++) succ[i] = arcs[g[1][i]][1];
-        return new Dominators(n, g[0], succ);
+        Csr g = Csr.build(n, sink -> {
+            for (int[] arc : arcs) sink.add(arc[0], arc[1]);
+        });
+        return new Dominators(n, g.start(), g.items());
     }
 
     /*

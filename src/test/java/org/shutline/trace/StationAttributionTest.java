@@ -12,7 +12,7 @@ import org.shutline.topology.EdgeKind;
 
 /**
  * {@link FeedTrace#run} (segment-graph attribution) against the plain node-graph method
- * {@code FeedTrace.runByNodeSearch} on random networks, in the base state and with
+ * {@link NodeSearchTrace} (test code) on random networks, in the base state and with
  * random overlays: valves closed, stations out, mains abandoned, edges cut or removed,
  * a bypass pipe added. Every field of the result must be equal, and
  * {@link FeedTrace#fedServices} must give the same fed set (on the base state it uses the
@@ -57,7 +57,7 @@ class StationAttributionTest {
 
     private static void same(long seed, String step, NetworkState s) {
         FeedTrace.Result fast = FeedTrace.run(s);
-        FeedTrace.Result ref = FeedTrace.runByNodeSearch(s, Progress.NONE);
+        FeedTrace.Result ref = NodeSearchTrace.run(s, Progress.NONE);
         String at = "seed " + seed + ", " + step + ": ";
         assertThat(fast.liveNodes()).as(at + "live nodes").isEqualTo(ref.liveNodes());
         assertThat(fast.fedServices()).as(at + "fed").isEqualTo(ref.fedServices());

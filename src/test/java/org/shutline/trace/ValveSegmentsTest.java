@@ -2,8 +2,11 @@ package org.shutline.trace;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.BitSet;
+import java.util.Random;
 import org.junit.jupiter.api.Test;
 import org.shutline.testnet.AsciiNet;
+import org.shutline.testnet.RandomNet;
 import org.shutline.testnet.TestNet;
 
 class ValveSegmentsTest {
@@ -104,5 +107,27 @@ class ValveSegmentsTest {
         assertThat(g.linkB(l)).isEqualTo(out);
         assertThat(g.canFlow(l, in)).isTrue();
         assertThat(g.canFlow(l, out)).isFalse();
+    }
+
+    /** Services and meters of a set of segments, both paths (few segments, most segments), against the per-segment lists. */
+    @Test
+    void servicesAndMetersOfSegmentSetsMatchThePerSegmentLists() {
+        for (long seed = 300; seed < 340; seed++) {
+            NetworkState s = RandomNet.build(seed).state();
+            ValveSegments vs = ValveSegments.build(s);
+            Random rnd = new Random(seed);
+            for (double share : new double[] {0.0, 0.2, 0.7, 1.0}) {
+                BitSet set = new BitSet();
+                for (int g = 0; g < vs.segmentCount(); g++) if (rnd.nextDouble() < share) set.set(g);
+                BitSet expected = new BitSet();
+                long meters = 0;
+                for (int g = set.nextSetBit(0); g >= 0; g = set.nextSetBit(g + 1)) {
+                    for (int sv : vs.services(g)) expected.set(sv);
+                    for (int sv : vs.services(g)) meters += s.network().services().get(sv).meters();
+                }
+                assertThat(vs.servicesOf(set)).as("seed %d share %s", seed, share).isEqualTo(expected);
+                assertThat(vs.metersOf(set)).as("seed %d share %s", seed, share).isEqualTo(meters);
+            }
+        }
     }
 }

@@ -59,8 +59,7 @@ public final class DistrictFeedCheck implements HazardCheck {
     static List<String> feeding(NetworkState s, FeedTrace.Result tr, List<Integer> stations, List<Station> sts) {
         List<String> out = new ArrayList<>();
         for (int st : stations) {
-            int e = s.stationEdge(st);
-            if (e >= 0 && !s.isRemoved(e) && s.stationInService(st) && tr.isLive(s.edgeFrom(e))) out.add(sts.get(st).id());
+            if (tr.stationPasses(s, st)) out.add(sts.get(st).id());
         }
         return out;
     }

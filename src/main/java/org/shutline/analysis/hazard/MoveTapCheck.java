@@ -46,8 +46,7 @@ public final class MoveTapCheck implements HazardCheck {
         int st = -1;
         for (int i = 0; i < net.stations().size(); i++) if (net.stations().get(i).id().equals(tap.stationId())) st = i;
         if (st < 0) return out;
-        int e = s.stationEdge(st);
-        if (e < 0 || s.isRemoved(e) || !s.stationInService(st) || !tr.isLive(s.edgeFrom(e))) return out;
+        if (!tr.stationPasses(s, st)) return out;
         Station station = net.stations().get(st);
         String monitor = independentMonitor(ctx, s, tr, station, t);
         boolean full = station.hasFullRelief();

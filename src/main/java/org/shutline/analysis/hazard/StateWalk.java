@@ -1,6 +1,6 @@
 package org.shutline.analysis.hazard;
 
-import org.shutline.topology.EdgeKind;
+import org.shutline.trace.Passage;
 import org.shutline.trace.NetworkState;
 
 /**
@@ -36,11 +36,9 @@ final class StateWalk {
         return x;
     }
 
+    /** Gas passes e either way ({@link Passage#passesBothWays}): present open pipe or valve, never a station. */
     static boolean passable(NetworkState s, int e) {
-        byte k = s.edgeKind(e);
-        if (k == EdgeKind.PIPE) return s.pipeLive(e);
-        if (k == EdgeKind.VALVE) return !s.isRemoved(e) && !s.valveClosed(s.edgeFeature(e));
-        return false;
+        return Passage.passesBothWays(s, e);
     }
 
 }

@@ -37,7 +37,7 @@ public final class TapOnDeadMainCheck implements HazardCheck {
         List<Hazard> out = new ArrayList<>();
         for (int st = 0; st < s.stationCount(); st++) {
             int e = s.stationEdge(st);
-            if (e < 0 || s.isRemoved(e) || !s.stationInService(st) || !tr.isLive(s.edgeFrom(e))) continue;
+            if (!tr.stationPasses(s, st)) continue;
             Station station = net.stations().get(st);
             for (int t : ctx.tapsOf(station.id())) {
                 int te = s.tapEdge(t);

@@ -10,6 +10,7 @@ import org.shutline.plan.WorkPoint;
 import org.shutline.topology.EdgeKind;
 import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
+import org.shutline.trace.Passage;
 
 /**
  * (e) A work point (a cut or a tie-in) that is still live when the step is carried out
@@ -63,12 +64,11 @@ public final class WorkZoneCheck implements HazardCheck {
             for (int i = 0; i < n; i++) {
                 int e = buf[i];
                 byte k = s.edgeKind(e);
-                if (k == EdgeKind.STATION) continue;
                 if (k == EdgeKind.VALVE && s.valveClosed(s.edgeFeature(e))) {
                     if (tr.isLive(s.opposite(e, v))) closed.add(s.edgeFeature(e));
                     continue;
                 }
-                if (k == EdgeKind.PIPE && !s.pipeLive(e)) continue;
+                if (!Passage.passesBothWays(s, e)) continue; // stations and dead pipe: the dead area does not spread across them
                 int w = s.opposite(e, v);
                 if (seen.get(w)) continue;
                 seen.set(w);

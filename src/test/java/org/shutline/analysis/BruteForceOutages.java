@@ -13,8 +13,8 @@ import org.shutline.trace.ValveSegments;
  * instruction says: its {@link StationStop} region never entered when valves do it
  * (the stop itself is checked by re-trace in {@link InstructionCheck}), else its link
  * never crossed. Services off = services in segments fed before and not reached.
- * O(cases x (segments + links)): for tests and as the benchmark baseline, not for use
- * on large networks.
+ * O(cases x (segments + links)). Test code: the reference of the outage and risk table
+ * tests and the baseline that {@code bench.OutageBenchmark} times the tables against.
  */
 public final class BruteForceOutages {
     private final ValveSegments segs;
@@ -98,7 +98,7 @@ public final class BruteForceOutages {
         BitSet blocked = (BitSet) region.clone();
         for (int st = 0; st < segs.state().stationCount(); st++) {
             int l = sg.stationLink(st);
-            if (l < 0 || !sg.isOpen(l) || !region.get(sg.linkB(l)) || region.get(sg.linkA(l)) || !before.get(sg.linkA(l))) continue;
+            if (!sg.feedsInto(l, region, before)) continue;
             StationStop.Result stop = stops.stationStop(st);
             if (stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
                 blocked.or(stop.isolation().region());
