@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
  */
 class LayeringTest {
     private static final List<String> LAYERS =
-            List.of("model", "io", "topology", "trace", "plan", "analysis", "render", "report", "ui", "cli");
+            List.of("model", "io", "topology", "trace", "plan", "analysis", "render", "report", "app", "ui", "cli");
     private static final Path SRC = Path.of("src/main/java/org/shutline");
     private static final Pattern IMPORT = Pattern.compile("^import\\s+(static\\s+)?([\\w.]+)", Pattern.MULTILINE);
 

@@ -17,8 +17,8 @@ class EngineLayeringTest {
 
     @ParameterizedTest
     @CsvSource({
-        "trace, plan analysis render report ui cli",
-        "analysis, render report ui cli"
+        "trace, plan analysis render report app ui cli",
+        "analysis, render report app ui cli"
     })
     void importsOnlyFromHigherLayers(String pkg, String forbidden) throws IOException {
         Path dir = Path.of("src/main/java/org/shutline", pkg);
