@@ -157,6 +157,8 @@ public final class SettingsFile {
                         + "' (keys " + (prefix.isEmpty() ? "at the top level" : "in " + what) + ": " + String.join(", ", keys)
                         + "; see docs/settings.md)");
             }
+            // the composer keeps both of a repeated key: which one was meant is not clear
+            if (out.containsKey(key)) throw new InputException(file + ":" + line(t.getKeyNode()) + ": key '" + prefix + key + "' given twice");
             out.put(key, t.getValueNode());
         }
         return out;
