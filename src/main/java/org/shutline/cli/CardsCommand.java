@@ -20,8 +20,6 @@ import org.shutline.analysis.ValveRoute;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Progress;
-import org.shutline.plan.Plan;
 import org.shutline.plan.PlanApplier;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.PlanReader;
@@ -74,20 +72,12 @@ public final class CardsCommand implements Callable<Integer> {
     @Mixin private Formats.TextJson format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PlanStates ps;
-        Workspace t;
-        AnalysisSettings s;
-        try {
-            s = responseOptions.apply(settingsOptions.settings());
-            t = input.open(s);
-            Plan plan = PlanReader.read(planFile);
-            ps = PlanApplier.apply(plan, t.base(), planFile.getFileName().toString());
-        } catch (InputException | PlanException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
+        Workspace t = input.open(s);
+        PlanStates ps = PlanApplier.apply(PlanReader.read(planFile), t.base(), planFile.getFileName().toString());
         ResponseSettings settings = s.response();
         Isolation.Options options = s.isolation();
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);

@@ -27,15 +27,9 @@ public final class CheckCommand implements Callable<Integer> {
     @Mixin private Formats.TextJson format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        Workspace w;
-        try {
-            w = Workspace.open(input.network, input.mapping, settings.load(), Progress.NONE);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        Workspace w = Workspace.open(input.network, input.mapping, settings.load(), Progress.NONE);
         CheckReport r = CheckReport.of(w.network(), w.findings());
         out.print(format.format() == Formats.Format.json ? r.toJson() : r.toText());
         out.flush();

@@ -2,7 +2,6 @@ package org.shutline.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.IncidentResponse;
@@ -13,11 +12,9 @@ import org.shutline.analysis.Placement;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.Restoration;
 import org.shutline.analysis.WorkPackages;
-import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Service;
 import org.shutline.trace.ValveSegments;
 import picocli.CommandLine.ArgGroup;
 import org.shutline.app.AnalysisSettings;
@@ -79,17 +76,11 @@ public final class IncidentCommand implements Callable<Integer> {
     @Mixin private Formats.TextJson format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        AnalysisSettings s;
-        Workspace t;
-        try {
-            s = responseOptions.apply(settingsOptions.settings());
-            t = input.open(s);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
+        Workspace t = input.open(s);
         ResponseSettings settings = s.response();
         Network net = t.network();
         GridSheets grid = GridSheets.of(net.crs());

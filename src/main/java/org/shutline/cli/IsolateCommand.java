@@ -58,17 +58,11 @@ public final class IsolateCommand implements Callable<Integer> {
     private Locations.Located located;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        AnalysisSettings s;
-        Workspace t;
-        try {
-            s = response.apply(settings.settings());
-            t = input.open(s);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        AnalysisSettings s = response.apply(settings.settings());
+        Workspace t = input.open(s);
         ValveSegments segs = t.segments();
         Placement pl = new Placement(segs);
         try {

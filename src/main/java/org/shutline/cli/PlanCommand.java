@@ -5,8 +5,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.LocalDate;
-import java.time.Period;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -15,25 +13,16 @@ import java.util.concurrent.Callable;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
-import org.shutline.analysis.hazard.HazardChecks;
-import org.shutline.analysis.hazard.StepContext;
 import org.shutline.io.AtomicFiles;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
-import org.shutline.model.Pressure;
-import org.shutline.model.PressureUnit;
-import org.shutline.analysis.OverpressureLimit;
 import org.shutline.model.Progress;
 import org.shutline.model.ServiceClass;
-import org.shutline.model.Severity;
 import org.shutline.model.Words;
 import org.shutline.plan.Plan;
-import org.shutline.plan.PlanApplier;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.PlanReader;
-import org.shutline.plan.PlanStates;
 import org.shutline.report.Csv;
-import org.shutline.topology.Topology;
 import org.shutline.app.AnalysisSettings;
 import org.shutline.app.PlanStudy;
 import org.shutline.app.Workspace;
@@ -70,15 +59,10 @@ public final class PlanCommand implements Callable<Integer> {
     @Mixin private PlanCheckOptions checks;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PlanEvaluation.Result r;
-        try {
-            r = evaluate(input, planFile, checks.apply("plan", settings.settings()), Progress.NONE);
-        } catch (InputException | PlanException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        PlanEvaluation.Result r = evaluate(input, planFile, checks.apply("plan", settings.settings()), Progress.NONE);
         String text = switch (format.format()) {
             case json -> Json.write(json(r));
             case csv -> stepsCsv(r);

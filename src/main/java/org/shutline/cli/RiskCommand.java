@@ -17,15 +17,12 @@ import org.shutline.model.Caution;
 import org.shutline.model.Network;
 import org.shutline.model.Progress;
 import org.shutline.report.Csv;
-import org.shutline.topology.Topology;
-import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
 import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -59,16 +56,11 @@ public final class RiskCommand implements Callable<Integer> {
     private boolean noMap;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         long t0 = System.nanoTime();
-        Workspace t;
-        try {
-            t = input.open(settings.load());
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        Workspace t = input.open(settings.load());
         long t1 = System.nanoTime();
         ValveSegments segs = t.segments();
         RiskTables tables = RiskTables.build(segs);

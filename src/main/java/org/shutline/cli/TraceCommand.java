@@ -45,15 +45,10 @@ public final class TraceCommand implements Callable<Integer> {
     @Mixin private Formats.TextJsonCsv format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Workspace w;
-        try {
-            w = input.open(settings.load());
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        Workspace w = input.open(settings.load());
         Network net = w.network();
         NetworkState state = w.base();
         for (String id : close) {
