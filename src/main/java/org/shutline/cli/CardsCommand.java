@@ -6,7 +6,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -21,8 +20,6 @@ import org.shutline.analysis.ValveRoute;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Progress;
-import org.shutline.plan.Plan;
 import org.shutline.plan.PlanApplier;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.PlanReader;
@@ -32,8 +29,10 @@ import org.shutline.report.PageFormat;
 import org.shutline.report.Paper;
 import org.shutline.report.Sheet;
 import org.shutline.report.TableSheets;
-import org.shutline.topology.Topology;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -52,12 +51,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "cards", mixinStandardHelpOptions = true,
     description = "Emergency cards per plan phase: shut-off at the work site and for over-pressure, for briefings and the fire department.")
 public final class CardsCommand implements Callable<Integer> {
-    enum Format { text, json }
-
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
 
     @Parameters(index = "1", paramLabel = "PLAN", description = "the work plan (YAML)")
     private Path planFile;
@@ -68,37 +64,22 @@ public final class CardsCommand implements Callable<Integer> {
     @Option(names = "--no-pdf", description = "do not write the PDF")
     private boolean noPdf;
 
-    @Option(names = "--crews", paramLabel = "N", description = "crews (default: computed from the 4 h shut-off target, as incident)")
-    private Integer crews;
-
     @Option(names = "--pit-radius", defaultValue = "2", description = "radius in metres of the excavation around a cut or tie-in point (default: ${DEFAULT-VALUE})")
     private double pitRadius;
 
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
-    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
-    private LocalDate asOf;
-
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    private Format format;
+    @Mixin private SettingsOptions settingsOptions;
+    @Mixin private ResponseOptions responseOptions;
+    @Mixin private Formats.TextJson format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PlanStates ps;
-        Topology t;
-        ResponseSettings settings;
-        try {
-            settings = crews == null ? ResponseSettings.DEFAULT : ResponseSettings.DEFAULT.withCrews(crews);
-            t = NetworkInput.load(network, mapping, Progress.NONE);
-            Plan plan = PlanReader.read(planFile);
-            ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
-        } catch (InputException | PlanException | IllegalArgumentException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
-        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
+        AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
+        Workspace t = input.open(s);
+        PlanStates ps = PlanApplier.apply(PlanReader.read(planFile), t.base(), planFile.getFileName().toString());
+        ResponseSettings settings = s.response();
+        Isolation.Options options = s.isolation();
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
         org.shutline.analysis.InstructionCheck.verify(ps, cards, "cards " + planFile.getFileName());
         GridSheets grid = GridSheets.of(t.network().crs());
@@ -119,7 +100,7 @@ public final class CardsCommand implements Callable<Integer> {
                 return NetworkInput.badInput(err, "cards: cannot write " + out.resolve("emergency-cards.pdf") + ": " + e.getMessage());
             }
         }
-        o.print(format == Format.json ? Json.write(json(t.network(), ps, cards, grid, settings)) : text(t.network(), ps, cards, grid, settings));
+        o.print(format.format() == Formats.Format.json ? Json.write(json(t.network(), ps, cards, grid, settings)) : text(t.network(), ps, cards, grid, settings));
         o.flush();
         return 0;
     }
@@ -161,7 +142,7 @@ public final class CardsCommand implements Callable<Integer> {
         org.shutline.report.ReportView view = org.shutline.report.ReportView.ofIncident(ps.afterPhase(c.phase()), c.site(),
                 "Emergency card: phase " + (c.phase() + 1) + " " + c.name() + ": gas blowing at the " + wp.kind() + " on " + wp.mainId(),
                 wp.x(), wp.y(), org.shutline.report.ReportView.ERG_115_ISOLATION_M, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M);
-        return org.shutline.report.ReportBuilder.of(view, network, org.shutline.report.ReportBuilder.Options.defaults().withPage(pf)).mapSheet();
+        return org.shutline.report.ReportBuilder.of(view, input.network, org.shutline.report.ReportBuilder.Options.defaults().withPage(pf)).mapSheet();
     }
 
     static List<List<String>> rows(Network net, PlanStates ps, EmergencyCards.Card c, GridSheets grid) {

@@ -3,15 +3,12 @@ package org.shutline.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.LocalDate;
 import java.time.LocalDateTime;
-import java.time.Period;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.Placement;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.Zone;
@@ -23,14 +20,15 @@ import org.shutline.report.PageFormat;
 import org.shutline.report.Paper;
 import org.shutline.report.ReportBuilder;
 import org.shutline.report.ReportView;
-import org.shutline.topology.Topology;
 import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
 import picocli.CommandLine.ArgGroup;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -70,8 +68,7 @@ public final class ExportCommand implements Callable<Integer> {
 
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     private Where where;
@@ -102,21 +99,10 @@ public final class ExportCommand implements Callable<Integer> {
         description = "isolation circle radius in metres (default: ${DEFAULT-VALUE}, Emergency Response Guidebook 2024, Guide 115)")
     private double radiusM;
 
-    @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
-    private String system;
-
-    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
-        description = "with --at: refuse a point farther than this from every active main (default: ${DEFAULT-VALUE})")
-    private double maxDistanceM;
-
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
-    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
-    private LocalDate asOf;
-
-    @Option(names = "--inspection-months", defaultValue = "15", description = "valve inspection interval in months (default: ${DEFAULT-VALUE}, 49 CFR 192.747)")
-    private int inspectionMonths;
+    @Mixin private NearestMainOptions near;
+    @Mixin private SettingsOptions settings;
+    @Mixin private PlanCheckOptions checks;
+    @Mixin private ResponseOptions response;
 
     @Override
     public Integer call() {
@@ -125,20 +111,17 @@ public final class ExportCommand implements Callable<Integer> {
         String bad = checkOptions();
         if (bad != null) return NetworkInput.badInput(err, bad);
         ReportBuilder.Options opts = options();
-        Isolation.Options iso = new Isolation.Options(asOf == null ? LocalDate.now() : asOf,
-                Period.ofMonths(inspectionMonths));
         ReportBuilder rb;
         try {
+            AnalysisSettings s = response.apply(checks.apply("export", settings.settings()));
             if (where.plan != null) {
-                PlanEvaluation.Result r = PlanCommand.evaluate(network, mapping, where.plan, null, iso.asOf(), inspectionMonths,
-                        Progress.NONE);
+                PlanEvaluation.Result r = PlanCommand.evaluate(input, where.plan, s, Progress.NONE);
                 if (step < 1 || step > r.steps().size()) {
                     return NetworkInput.badInput(err, "export: the plan has steps 1 to " + r.steps().size() + ", not " + step);
                 }
-                rb = ReportBuilder.of(ReportView.ofStep(r, step, iso), network, opts).withPlan(r, where.plan);
+                rb = ReportBuilder.of(ReportView.ofStep(r, step, s.isolation()), input.network, opts).withPlan(r, where.plan);
             } else {
-                Topology t = NetworkInput.load(network, mapping, Progress.NONE);
-                rb = ReportBuilder.of(incident(t, iso), network, opts);
+                rb = ReportBuilder.of(incident(input.open(s), s), input.network, opts);
             }
         } catch (InputException | PlanException | IllegalArgumentException e) {
             return NetworkInput.badInput(err, e.getMessage());
@@ -175,24 +158,24 @@ public final class ExportCommand implements Callable<Integer> {
                 .withDpi(dpi).withFormats(fs).withPreparedBy(preparedBy).withMade(LocalDateTime.now().withSecond(0).withNano(0));
     }
 
-    private ReportView incident(Topology t, Isolation.Options iso) {
-        NetworkState base = NetworkState.of(t);
-        ValveSegments segs = ValveSegments.build(base);
+    private ReportView incident(Workspace w, AnalysisSettings s) {
+        NetworkState base = w.base();
+        ValveSegments segs = w.segments();
         Placement pl = new Placement(segs);
         Locations.Located loc;
         try {
-            loc = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, system, maxDistanceM);
+            loc = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, near.system, near.maxDistanceM);
         } catch (Locations.Refusal e) {
             throw new IllegalArgumentException("export: " + e.getMessage(), e);
         }
         Zone zone = loc.zone();
-        // the same field order (crews' routes, doubtful valves first) and crews as `incident` with its defaults
-        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(segs, iso, zone,
-                org.shutline.analysis.ResponseSettings.DEFAULT);
+        // the same field order (crews' routes, doubtful valves first) and crews as `incident` with the same settings
+        org.shutline.analysis.IncidentResponse.Result r = org.shutline.analysis.IncidentResponse.leak(segs, s.isolation(), zone,
+                s.response());
         org.shutline.analysis.InstructionCheck.verify(segs, r.isolation(), "export " + loc.label());
         String subject = where.main != null ? "Incident on main " + where.main
                 : String.format(Locale.ROOT, "Incident at %.1f, %.1f%s", where.at[0], where.at[1],
-                    system == null ? "" : " (" + system + ")");
+                    near.system == null ? "" : " (" + near.system + ")");
         double x = where.at == null ? Double.NaN : where.at[0];
         double y = where.at == null ? Double.NaN : where.at[1];
         return ReportView.ofIncident(base, r, subject, x, y, radiusM, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M);

@@ -2,9 +2,6 @@ package org.shutline.cli;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.nio.file.Path;
-import java.time.LocalDate;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.IncidentResponse;
@@ -12,25 +9,20 @@ import org.shutline.analysis.Isolation;
 import org.shutline.analysis.InstructionCheck;
 import org.shutline.analysis.OverpressureShutoff;
 import org.shutline.analysis.Placement;
-import org.shutline.analysis.ResponseRates;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.Restoration;
-import org.shutline.analysis.ValveRoute;
 import org.shutline.analysis.WorkPackages;
-import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Progress;
-import org.shutline.model.Service;
-import org.shutline.topology.Topology;
-import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
 import picocli.CommandLine.ArgGroup;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -46,8 +38,6 @@ import picocli.CommandLine.Spec;
 @Command(name = "incident", mixinStandardHelpOptions = true,
     description = "Emergency response to a leak, damage or over-pressure: valves, crews, customers, shut-off and relight.")
 public final class IncidentCommand implements Callable<Integer> {
-    enum Format { text, json }
-
     enum Kind { leak, damage, overpressure }
 
     static final class Where {
@@ -67,8 +57,7 @@ public final class IncidentCommand implements Callable<Integer> {
 
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     private Where where;
@@ -82,54 +71,20 @@ public final class IncidentCommand implements Callable<Integer> {
     @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
         description = "refuse a place farther than this from every active main, and a grid cell larger (default: ${DEFAULT-VALUE})")
     private double maxDistanceM;
-    @Option(names = "--crews", paramLabel = "N", description = "crews available (default: computed from --target-hours)")
-    private Integer crews;
-
-    @Option(names = "--target-hours", defaultValue = "4", description = "hours to finish the shut-off in (default: ${DEFAULT-VALUE})")
-    private double targetHours;
-
-    @Option(names = "--relight-hours", defaultValue = "24", description = "hours to finish the relight in (default: ${DEFAULT-VALUE})")
-    private double relightHours;
-
-    @Option(names = "--valve-minutes", defaultValue = "10", description = "minutes to operate one valve (default: ${DEFAULT-VALUE}, common practice)")
-    private double valveMinutes;
-
-    @Option(names = "--speed", defaultValue = "25", description = "crew driving speed in km/h (default: ${DEFAULT-VALUE}, common practice)")
-    private double speed;
-
-    @Option(names = "--detour", defaultValue = "1.3", description = "road distance / straight-line distance (default: ${DEFAULT-VALUE}, common practice)")
-    private double detour;
-
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
-    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
-    private LocalDate asOf;
-
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    private Format format;
-
+    @Mixin private SettingsOptions settingsOptions;
+    @Mixin private ResponseOptions responseOptions;
+    @Mixin private Formats.TextJson format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        ResponseSettings settings;
-        try {
-            settings = new ResponseSettings(ResponseRates.DEFAULT, new ValveRoute.Settings(valveMinutes, speed, detour),
-                    crews == null ? 1 : crews, crews != null, targetHours, relightHours);
-        } catch (IllegalArgumentException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
-        Topology t;
-        try {
-            t = NetworkInput.load(network, mapping, Progress.NONE);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
+        Workspace t = input.open(s);
+        ResponseSettings settings = s.response();
         Network net = t.network();
         GridSheets grid = GridSheets.of(net.crs());
-        ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        ValveSegments segs = t.segments();
         Locations.Located place;
         try {
             place = place(net, segs, grid, err);
@@ -137,7 +92,7 @@ public final class IncidentCommand implements Callable<Integer> {
             return NetworkInput.badInput(err, "incident: " + e.getMessage());
         }
         if (place == null) return 2;
-        Isolation.Options options = Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf);
+        Isolation.Options options = s.isolation();
         ObjectNode root = Json.object();
         StringBuilder sb = new StringBuilder();
         root.put("kind", kind.name());
@@ -167,7 +122,7 @@ public final class IncidentCommand implements Callable<Integer> {
         java.util.BitSet workSet;
         if (kind == Kind.overpressure) {
             String sys = system != null ? system : IncidentResponse.systemOf(segs, place.zone());
-            if (sys == null || t.graph().systemIndex(sys) < 0) {
+            if (sys == null || t.topology().graph().systemIndex(sys) < 0) {
                 return NetworkInput.badInput(err, "incident: " + (sys == null ? "no pressure system at the place given" : "no pressure system '" + sys + "'"));
             }
             OverpressureShutoff.Result r = OverpressureShutoff.of(segs, options, sys, settings);
@@ -195,7 +150,7 @@ public final class IncidentCommand implements Callable<Integer> {
         sb.append('\n');
         EmergencyReport.packagesText(sb, wp, 8);
         sb.append('\n').append(Caution.TEXT).append('\n');
-        out.print(format == Format.json ? Json.write(root) : sb.toString());
+        out.print(format.format() == Formats.Format.json ? Json.write(root) : sb.toString());
         out.flush();
         return 0;
     }
@@ -206,9 +161,5 @@ public final class IncidentCommand implements Callable<Integer> {
         if (where.main != null) return Locations.main(pl, where.main);
         if (where.usng != null) return Locations.usng(pl, grid, where.usng, system, maxDistanceM);
         return Locations.address(pl, net, where.address, "incident", err);
-    }
-
-    private static int fail(PrintWriter err, String message) {
-        return NetworkInput.badInput(err, message);
     }
 }

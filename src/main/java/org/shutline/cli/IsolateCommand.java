@@ -4,29 +4,25 @@ import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.nio.file.Path;
-import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.IncidentResponse;
 import org.shutline.analysis.Isolation;
-import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.Placement;
 import org.shutline.analysis.Zone;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Progress;
-import org.shutline.topology.Topology;
-import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
 import picocli.CommandLine.ArgGroup;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -38,8 +34,6 @@ import picocli.CommandLine.Spec;
 @Command(name = "isolate", mixinStandardHelpOptions = true,
     description = "Valve isolation of a point or a main: valves to close, fallbacks, customers off.")
 public final class IsolateCommand implements Callable<Integer> {
-    enum Format { text, json }
-
     static final class Where {
         @Option(names = "--at", paramLabel = "X,Y", split = ",", arity = "1", converter = Locations.FiniteNumber.class,
             description = "a point in the network CRS; placed on the nearest active main")
@@ -51,44 +45,28 @@ public final class IsolateCommand implements Callable<Integer> {
 
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     private Where where;
 
-    @Option(names = "--system", paramLabel = "ID", description = "with --at: take the nearest active main of this system")
-    private String system;
-
-    @Option(names = "--max-distance-m", paramLabel = "M", defaultValue = "100", converter = Locations.PositiveMetres.class,
-        description = "with --at: refuse a point farther than this from every active main (default: ${DEFAULT-VALUE})")
-    private double maxDistanceM;
-
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
-    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
-    private LocalDate asOf;
-
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    private Format format;
+    @Mixin private NearestMainOptions near;
+    @Mixin private SettingsOptions settings;
+    @Mixin private ResponseOptions response;
+    @Mixin private Formats.TextJson format;
 
     private Locations.Located located;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Topology t;
-        try {
-            t = NetworkInput.load(network, mapping, Progress.NONE);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
-        ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        AnalysisSettings s = response.apply(settings.settings());
+        Workspace t = input.open(s);
+        ValveSegments segs = t.segments();
         Placement pl = new Placement(segs);
         try {
-            located = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, system, maxDistanceM);
+            located = where.main != null ? Locations.main(pl, where.main) : Locations.at(pl, where.at, near.system, near.maxDistanceM);
         } catch (Locations.Refusal e) {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
@@ -96,22 +74,21 @@ public final class IsolateCommand implements Callable<Integer> {
         Isolation.Result r;
         ValveOrder.Result order;
         try {
-            // the same field order as `incident` and `export` (crews computed from the 4 h target)
-            IncidentResponse.Result resp = IncidentResponse.leak(segs, Isolation.Options.defaults(asOf == null ? LocalDate.now() : asOf),
-                    zone, ResponseSettings.DEFAULT);
+            // the same field order as `incident` and `export` (crews computed from the 4 h target unless set)
+            IncidentResponse.Result resp = IncidentResponse.leak(segs, s.isolation(), zone, s.response());
             r = resp.isolation();
             order = resp.order();
         } catch (IllegalArgumentException e) {
             return NetworkInput.badInput(err, "isolate: " + e.getMessage());
         }
         org.shutline.analysis.InstructionCheck.verify(segs, r, "isolate " + zoneText());
-        out.print(format == Format.json ? Json.write(json(t.network(), r, order, located.placed())) : text(t.network(), r, order));
+        out.print(format.format() == Formats.Format.json ? Json.write(json(t.network(), r, order, located.placed())) : text(t.network(), r, order));
         out.flush();
         return 0;
     }
 
     private String zoneText() {
-        return located.label() + (where.main == null && system != null ? " on " + system : "") + "\n" + located.placedText();
+        return located.label() + (where.main == null && near.system != null ? " on " + near.system : "") + "\n" + located.placedText();
     }
 
     static ObjectNode json(Network net, Isolation.Result r, ValveOrder.Result order, Placement.Placed placed) {

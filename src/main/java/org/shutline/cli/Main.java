@@ -63,6 +63,10 @@ public final class Main implements Runnable {
             return code == 0 && errors > 0 ? 1 : code;
         });
         cl.setExecutionExceptionHandler((e, line, parsed) -> {
+            // input that cannot be read or used (network, mapping, settings or plan file): the message, exit 2
+            if (e instanceof org.shutline.io.InputException || e instanceof org.shutline.plan.PlanException) {
+                return NetworkInput.badInput(line.getErr(), e.getMessage());
+            }
             if (e instanceof org.shutline.analysis.UnverifiedInstructionException u) {
                 // an answer that its re-trace does not confirm is never printed as an instruction
                 line.getErr().println("shutline: " + u.getMessage());

@@ -55,7 +55,7 @@ public final class PlanBenchCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         long t0 = System.nanoTime();
-        Topology t = NetworkInput.load(network, null, Progress.NONE);
+        Topology t = NetworkInput.load(network, null, org.shutline.app.AnalysisSettings.defaults(), Progress.NONE).topology();
         double load = (System.nanoTime() - t0) / 1e6;
         Plan plan = plan(t.network());
         t0 = System.nanoTime();

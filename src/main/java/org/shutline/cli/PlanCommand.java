@@ -5,8 +5,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.LocalDate;
-import java.time.Period;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -15,26 +13,21 @@ import java.util.concurrent.Callable;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
-import org.shutline.analysis.hazard.HazardChecks;
-import org.shutline.analysis.hazard.StepContext;
 import org.shutline.io.AtomicFiles;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
-import org.shutline.model.Pressure;
-import org.shutline.model.PressureUnit;
-import org.shutline.analysis.OverpressureLimit;
 import org.shutline.model.Progress;
 import org.shutline.model.ServiceClass;
-import org.shutline.model.Severity;
 import org.shutline.model.Words;
 import org.shutline.plan.Plan;
-import org.shutline.plan.PlanApplier;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.PlanReader;
-import org.shutline.plan.PlanStates;
 import org.shutline.report.Csv;
-import org.shutline.topology.Topology;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.PlanStudy;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -50,61 +43,27 @@ import picocli.CommandLine.Spec;
 @Command(name = "plan", mixinStandardHelpOptions = true,
     description = "Evaluate a work plan step by step: customers off gas, valves, hazards.")
 public final class PlanCommand implements Callable<Integer> {
-    enum Format { text, json, csv }
-
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
 
     @Parameters(index = "1", paramLabel = "PLAN", description = "the work plan (YAML)")
     private Path planFile;
 
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
-    @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default: ${DEFAULT-VALUE})")
-    private Format format;
+    @Mixin private Formats.TextJsonCsv format;
 
     @Option(names = "--out", paramLabel = "DIR", description = "also write plan-steps.csv, plan-hazards.csv and plan.json into DIR")
     private Path out;
 
-    @Option(names = "--unit", paramLabel = "UNIT", description = "pressure unit for messages: kPa, psi, in_wc, mbar (default: the plan's)")
-    private String unit;
-
-    @Option(names = "--as-of", paramLabel = "DATE", description = "date for valve inspection checks (default: today)")
-    private LocalDate asOf;
-
-    @Option(names = "--low-pressure-limit", paramLabel = "P", defaultValue = "0.5psi",
-        description = "limit for a low-pressure district under 49 CFR 192.201(a)(1), a value and unit: 0.5psi, 14in_wc, 3.45kPa, 34.5mbar (default: ${DEFAULT-VALUE}, common practice; set your own)")
-    private String lowPressureLimit;
-
-    @Option(names = "--sensing-line-m", paramLabel = "M", defaultValue = "10",
-        description = "a cut or tie-in this close to a sensing tap or its control line warns, in metres (default: ${DEFAULT-VALUE}, common practice)")
-    private double sensingLineM;
-
-    @Option(names = "--inspection-months", defaultValue = "15", description = "valve inspection interval in months (default: ${DEFAULT-VALUE}, 49 CFR 192.747)")
-    private int inspectionMonths;
+    @Mixin private SettingsOptions settings;
+    @Mixin private PlanCheckOptions checks;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Pressure limit = parsePressure(lowPressureLimit);
-        if (limit == null || limit.pascals() <= 0) {
-            return NetworkInput.badInput(err, "plan: --low-pressure-limit takes a positive value and a unit (0.5psi, 14in_wc, 3.45kPa, 34.5mbar), not '"
-                    + lowPressureLimit + "'");
-        }
-        if (!(sensingLineM >= 0) || Double.isInfinite(sensingLineM)) {
-            return NetworkInput.badInput(err, "plan: --sensing-line-m takes a distance of 0 m or more, not " + sensingLineM);
-        }
-        PlanEvaluation.Result r;
-        try {
-            r = evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, limit, sensingLineM, Progress.NONE);
-        } catch (InputException | PlanException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
-        String text = switch (format) {
+        PlanEvaluation.Result r = evaluate(input, planFile, checks.apply("plan", settings.settings()), Progress.NONE);
+        String text = switch (format.format()) {
             case json -> Json.write(json(r));
             case csv -> stepsCsv(r);
             default -> text(r);
@@ -123,28 +82,12 @@ public final class PlanCommand implements Callable<Integer> {
         return r.hasCritical() ? 1 : 0;
     }
 
-    /** Read, apply and evaluate; shared with the window and the export commands. */
-    public static PlanEvaluation.Result evaluate(Path network, Path mapping, Path planFile, String unit, LocalDate asOf,
-                                                 int inspectionMonths, Progress progress) throws InputException, PlanException {
-        return evaluate(network, mapping, planFile, unit, asOf, inspectionMonths, OverpressureLimit.DEFAULT_LOW_PRESSURE_LIMIT,
-                StepContext.DEFAULT_SENSING_LINE_M, progress);
-    }
-
-    /** As above, with the low-pressure limit of 49 CFR 192.201(a)(1) and the sensing-line distance set. */
-    public static PlanEvaluation.Result evaluate(Path network, Path mapping, Path planFile, String unit, LocalDate asOf,
-                                                 int inspectionMonths, Pressure lowPressureLimit, double sensingLineM,
-                                                 Progress progress) throws InputException, PlanException {
-        Topology t = NetworkInput.load(network, mapping, progress);
+    /** Opens the network, reads the plan and evaluates it ({@link PlanStudy}); shared with {@code export --plan}. */
+    static PlanEvaluation.Result evaluate(NetworkOptions input, Path planFile, AnalysisSettings settings, Progress progress)
+            throws InputException, PlanException {
+        Workspace w = input.open(settings);
         Plan plan = PlanReader.read(planFile);
-        PressureUnit pu = plan.pressureUnit();
-        if (unit != null) {
-            pu = PressureUnit.parse(unit).orElseThrow(() -> new PlanException("unknown pressure unit '" + unit + "'", 0));
-        }
-        PlanStates ps = PlanApplier.apply(plan, t, planFile.getFileName().toString());
-        StepContext.Settings settings = new StepContext.Settings(
-                new org.shutline.analysis.ValveDoubt.Settings(asOf == null ? LocalDate.now() : asOf, Period.ofMonths(inspectionMonths)),
-                pu, lowPressureLimit, sensingLineM);
-        return PlanEvaluation.evaluate(ps, HazardChecks.discover(), settings, org.shutline.analysis.GasOffExtent.DEFAULT_BUFFER_M, progress);
+        return PlanStudy.evaluate(w, plan, planFile.getFileName().toString(), settings, progress);
     }
 
     /** {@code text} split at blanks into lines of at most {@code width} characters (a longer word on a line of its own). */
@@ -161,14 +104,6 @@ public final class PlanCommand implements Callable<Integer> {
         }
         out.add(line.toString());
         return out;
-    }
-
-    /** A pressure written as a number and a unit ("0.5psi", "14 in_wc", "3.45kPa"); null when it is not one. */
-    static Pressure parsePressure(String text) {
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*([0-9]+(?:\\.[0-9]+)?)\\s*([A-Za-z_ .]+?)\\s*").matcher(text == null ? "" : text);
-        if (!m.matches()) return null;
-        double v = Double.parseDouble(m.group(1));
-        return PressureUnit.parse(m.group(2)).map(u -> Pressure.of(v, u)).orElse(null);
     }
 
     static String hazardCodes(List<Hazard> hs) {

@@ -17,13 +17,12 @@ import org.shutline.model.Caution;
 import org.shutline.model.Network;
 import org.shutline.model.Progress;
 import org.shutline.report.Csv;
-import org.shutline.topology.Topology;
-import org.shutline.trace.NetworkState;
 import org.shutline.trace.ValveSegments;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -47,8 +46,8 @@ public final class RiskCommand implements Callable<Integer> {
 
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
+    @Mixin private NetworkOptions input;
+    @Mixin private SettingsFileOption settings;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = ".", description = "folder for the tables, layer and map (default: the current folder)")
     private Path out;
@@ -56,22 +55,14 @@ public final class RiskCommand implements Callable<Integer> {
     @Option(names = "--no-map", description = "do not draw risk-map.png")
     private boolean noMap;
 
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
-
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         long t0 = System.nanoTime();
-        Topology t;
-        try {
-            t = NetworkInput.load(network, mapping, Progress.NONE);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
+        Workspace t = input.open(settings.load());
         long t1 = System.nanoTime();
-        ValveSegments segs = ValveSegments.build(NetworkState.of(t));
+        ValveSegments segs = t.segments();
         RiskTables tables = RiskTables.build(segs);
         long t2 = System.nanoTime();
         try {

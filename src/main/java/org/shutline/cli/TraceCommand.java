@@ -4,7 +4,6 @@ import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
@@ -13,17 +12,16 @@ import java.util.concurrent.Callable;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
-import org.shutline.model.Progress;
 import org.shutline.model.Service;
 import org.shutline.model.Station;
 import org.shutline.report.Csv;
-import org.shutline.topology.Topology;
 import org.shutline.trace.FeedTrace;
 import org.shutline.trace.NetworkState;
+import org.shutline.app.Workspace;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -36,48 +34,36 @@ import picocli.CommandLine.Spec;
 @Command(name = "trace", mixinStandardHelpOptions = true,
     description = "Feed trace: what each station feeds; with --close, what a valve closure puts off gas.")
 public final class TraceCommand implements Callable<Integer> {
-    enum Format { text, json, csv }
-
     @Spec private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "NETWORK", description = "a .gpkg file or a folder of shapefiles")
-    private Path network;
-
-    @Option(names = "--mapping", paramLabel = "FILE", description = "field-mapping file (YAML)")
-    private Path mapping;
+    @Mixin private NetworkOptions input;
+    @Mixin private SettingsFileOption settings;
 
     @Option(names = "--close", split = ",", paramLabel = "VALVE", description = "valve ids to close (what-if)")
     private List<String> close = new ArrayList<>();
 
-    @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default: ${DEFAULT-VALUE})")
-    private Format format;
+    @Mixin private Formats.TextJsonCsv format;
 
     @Override
-    public Integer call() {
+    public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Topology t;
-        try {
-            t = NetworkInput.load(network, mapping, Progress.NONE);
-        } catch (InputException e) {
-            return NetworkInput.badInput(err, e.getMessage());
-        }
-        Network net = t.network();
-        NetworkState base = NetworkState.of(t);
-        NetworkState state = base;
+        Workspace w = input.open(settings.load());
+        Network net = w.network();
+        NetworkState state = w.base();
         for (String id : close) {
-            int v = valveIndex(net, id);
+            int v = w.valveIndex(id);
             if (v < 0) {
-                return NetworkInput.badInput(err, "trace: no valve with id '" + id + "' in " + network);
+                return NetworkInput.badInput(err, "trace: no valve with id '" + id + "' in " + input.network);
             }
             state = state.withValveClosed(v, true);
         }
-        FeedTrace.Result normal = FeedTrace.run(base);
+        FeedTrace.Result normal = w.trace();
         FeedTrace.Result tr = close.isEmpty() ? normal : FeedTrace.run(state);
         BitSet off = normal.fedServices();
         off.andNot(tr.fedServices());
         BitSet unfed = tr.unfedServices();
-        switch (format) {
+        switch (format.format()) {
             case json -> out.print(Json.write(json(net, tr, unfed, off)));
             case csv -> out.print(csv(net, tr));
             default -> out.print(text(net, tr, unfed, off));
@@ -86,10 +72,6 @@ public final class TraceCommand implements Callable<Integer> {
         return 0;
     }
 
-    static int valveIndex(Network net, String id) {
-        for (int i = 0; i < net.valves().size(); i++) if (net.valves().get(i).id().equals(id)) return i;
-        return -1;
-    }
 
     private static long meters(Network net, BitSet b) {
         long m = 0;

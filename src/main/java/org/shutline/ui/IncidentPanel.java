@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.app.Workspace;
 import org.shutline.model.Plural;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;

@@ -47,6 +47,7 @@ import javax.swing.WindowConstants;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
 import org.shutline.analysis.PlanEvaluation;
+import org.shutline.app.Workspace;
 import org.shutline.io.FieldMapping;
 import org.shutline.io.NetworkReader;
 import org.shutline.model.Caution;

@@ -15,6 +15,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Point;
 import org.locationtech.jts.geom.Polygon;
+import org.shutline.app.Workspace;
 import org.shutline.render.LayerPainter;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapPainter;

@@ -26,6 +26,7 @@ import javax.swing.JComponent;
 import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
 import org.locationtech.jts.geom.Envelope;
+import org.shutline.app.Workspace;
 import org.shutline.model.Caution;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapScene;

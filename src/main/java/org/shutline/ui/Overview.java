@@ -6,6 +6,7 @@ import java.awt.geom.AffineTransform;
 import java.awt.image.BufferedImage;
 import java.util.ArrayList;
 import java.util.List;
+import org.shutline.app.Workspace;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapStyle;
 import org.shutline.render.Viewport;

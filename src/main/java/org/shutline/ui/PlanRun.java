@@ -3,16 +3,14 @@ package org.shutline.ui;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import org.shutline.analysis.GasOffExtent;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.analysis.hazard.Hazard;
-import org.shutline.analysis.hazard.HazardChecks;
-import org.shutline.analysis.hazard.StepContext;
+import org.shutline.app.AnalysisSettings;
+import org.shutline.app.PlanStudy;
+import org.shutline.app.Workspace;
 import org.shutline.model.Progress;
 import org.shutline.model.Valve;
 import org.shutline.plan.Plan;
-import org.shutline.plan.PlanApplier;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.PlanValidator;
 import org.shutline.plan.StepAction;
@@ -36,10 +34,7 @@ public final class PlanRun {
         List<PlanException> problems = PlanValidator.validate(plan, ws.network(), fileName);
         if (!problems.isEmpty()) throw problems.get(0);
         progress.checkCancelled();
-        var states = PlanApplier.apply(plan, ws.topology(), fileName);
-        progress.checkCancelled();
-        StepContext.Settings settings = new StepContext.Settings(asOf, Isolation.DEFAULT_INSPECTION_INTERVAL, plan.pressureUnit());
-        return PlanEvaluation.evaluate(states, HazardChecks.discover(), settings, GasOffExtent.DEFAULT_BUFFER_M, progress);
+        return PlanStudy.evaluate(ws, plan, fileName, AnalysisSettings.defaults(asOf), progress);
     }
 
     /** The overlays that show step result {@code s} on the map. */

@@ -9,6 +9,7 @@ import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.WorkPackages;
 import org.shutline.analysis.Zone;
+import org.shutline.app.Workspace;
 
 /**
  * The window's incident text on the sample town: the command line's defaults (crews

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import org.shutline.app.Workspace;
 import org.shutline.model.Progress;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapStyle;

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.shutline.app.Workspace;
 import org.shutline.io.FieldMapping;
 import org.shutline.io.NetworkReader;
 import org.shutline.model.ContextLayer;

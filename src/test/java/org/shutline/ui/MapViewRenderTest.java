@@ -11,6 +11,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Point;
 import org.shutline.analysis.PlanEvaluation;
+import org.shutline.app.Workspace;
 import org.shutline.model.Progress;
 import org.shutline.model.Valve;
 import org.shutline.render.MapOverlays;

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.shutline.app.Workspace;
 import org.shutline.render.MapOverlays;
 import org.shutline.render.MapStyle;
 import org.shutline.render.Viewport;

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import org.junit.jupiter.api.Test;
 import org.shutline.analysis.Placement;
+import org.shutline.app.Workspace;
 
 /**
  * Headless picks and incident clicks on the sample town (sample-gis/README.md): ST-N1

@@ -1,6 +1,7 @@
 package org.shutline.ui;
 
 import java.nio.file.Path;
+import org.shutline.app.Workspace;
 import org.shutline.io.InputException;
 import org.shutline.model.Progress;
 import org.shutline.plan.Plan;

@@ -12,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Envelope;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
+import org.shutline.app.Workspace;
 import org.shutline.model.Progress;
 import org.shutline.plan.PlanReader;
 import org.shutline.plan.StepAction;

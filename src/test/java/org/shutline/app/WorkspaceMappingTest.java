@@ -1,4 +1,4 @@
-package org.shutline.ui;
+package org.shutline.app;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -21,6 +21,8 @@ import org.shutline.topology.Topology;
  * those two error findings, and gives the same findings as the command-line read.
  */
 class WorkspaceMappingTest {
+    private static final Path NETWORK = Path.of("sample-gis/tallowmere.gpkg");
+
     @TempDir Path dir;
 
     @Test
@@ -33,14 +35,14 @@ class WorkspaceMappingTest {
                       status: { actve: active }
                 tolerances: { point_m: 6 }
                 """);
-        Workspace plain = Workspace.load(SampleWorkspace.NETWORK, Progress.NONE);
-        Workspace mapped = Workspace.load(SampleWorkspace.NETWORK, mapping, Progress.NONE);
+        Workspace plain = Workspace.load(NETWORK, Progress.NONE);
+        Workspace mapped = Workspace.load(NETWORK, mapping, Progress.NONE);
         assertThat(mapped.mapping()).isEqualTo(mapping);
         assertThat(codes(plain.findings())).contains("unknown-value", "valve-off-main");
         assertThat(codes(mapped.findings())).doesNotContain("unknown-value", "valve-off-main");
         // the command line's read (check --mapping) of the same file: the same findings, in the same order
         FieldMapping m = FieldMapping.load(mapping);
-        Topology t = NetworkBuilder.build(NetworkReader.read(SampleWorkspace.NETWORK, m), m.tolerances(), Progress.NONE);
+        Topology t = NetworkBuilder.build(NetworkReader.read(NETWORK, m), m.tolerances(), Progress.NONE);
         assertThat(mapped.findings().stream().map(Finding::message).toList())
                 .isEqualTo(t.findings().stream().map(Finding::message).toList());
         // a context layer added later keeps the mapping the network was read with
