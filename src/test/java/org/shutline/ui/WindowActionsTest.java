@@ -161,6 +161,36 @@ class WindowActionsTest {
         assertThat(ctx.tasks).extracting(Task::name).containsExactly("find V-001");
     }
 
+    @Test
+    void theDarkThemeCheckBoxSwitchesTheMapStyleAndIsRemembered() throws Exception {
+        javax.swing.LookAndFeel before = javax.swing.UIManager.getLookAndFeel();
+        try {
+            Context ctx = new Context(false);
+            ctx.map = new MapView();
+            int[] restyled = {0};
+            ThemeAction theme = new ThemeAction(ctx, prefs, () -> restyled[0]++);
+            javax.swing.JCheckBoxMenuItem item = new javax.swing.JCheckBoxMenuItem(theme);
+            assertThat(item.isSelected()).isFalse();
+            assertThat(item.getAccelerator()).isEqualTo(javax.swing.KeyStroke.getKeyStroke(java.awt.event.KeyEvent.VK_D,
+                    java.awt.event.InputEvent.CTRL_DOWN_MASK | java.awt.event.InputEvent.SHIFT_DOWN_MASK));
+            SwingUtilities.invokeAndWait(() -> item.doClick(0));
+            assertThat(theme.dark()).isTrue();
+            assertThat(ctx.map.style()).isEqualTo(org.shutline.render.MapStyle.DARK);
+            assertThat(prefs.getBoolean("dark", false)).isTrue();
+            assertThat(restyled[0]).isEqualTo(1);
+            // a new window starts dark; switching from code moves the check box too
+            ThemeAction next = new ThemeAction(ctx, prefs, () -> restyled[0]++);
+            javax.swing.JCheckBoxMenuItem nextItem = new javax.swing.JCheckBoxMenuItem(next);
+            assertThat(nextItem.isSelected()).isTrue();
+            SwingUtilities.invokeAndWait(() -> next.apply(false));
+            assertThat(nextItem.isSelected()).isFalse();
+            assertThat(ctx.map.style()).isEqualTo(org.shutline.render.MapStyle.LIGHT);
+            assertThat(prefs.getBoolean("dark", true)).isFalse();
+        } finally {
+            javax.swing.UIManager.setLookAndFeel(before);
+        }
+    }
+
     private Path mappingFile() throws Exception {
         Path mapping = dir.resolve("mapping.yaml");
         Files.writeString(mapping, """
@@ -210,6 +240,7 @@ class WindowActionsTest {
         final List<String> messages = new ArrayList<>();
         volatile Throwable failure;
         Workspace ws;
+        MapView map;
         Pick selected;
         int zooms;
 
@@ -219,7 +250,10 @@ class WindowActionsTest {
         }
 
         @Override public Workspace workspace() { return ws; }
-        @Override public MapView map() { throw new AssertionError("the map is not used here"); }
+        @Override public MapView map() {
+            assertThat(map).as("the map is used in this test").isNotNull();
+            return map;
+        }
         @Override public Pick selected() { return selected; }
         @Override public void status(String text) { messages.add(text); }
 
