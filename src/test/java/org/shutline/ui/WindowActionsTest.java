@@ -191,6 +191,60 @@ class WindowActionsTest {
         }
     }
 
+    @Test
+    void saveAsksForAFileForANewPlanWritesItAndTheDiscardQuestionFollowsTheAnswer() throws Exception {
+        Context ctx = new Context(false);
+        ctx.ws = SampleWorkspace.get();
+        AtomicReference<PlanPanel> plan = new AtomicReference<>();
+        AtomicReference<SavePlanAction> save = new AtomicReference<>();
+        RecentFiles recent = new RecentFiles(prefs, new NetworkOpener(ctx, () -> true, (w, n, p, f) -> { }));
+        Answers ask = new Answers(dir.resolve("valve-test"), null);
+        SwingUtilities.invokeAndWait(() -> {
+            plan.set(new PlanPanel(ctx, () -> save.get().save()));
+            save.set(new SavePlanAction(ctx, ask, plan.get(), recent, null));
+            // a new plan with one step: close the valve picked on the map
+            int v = ctx.ws.valveIndex("V-001");
+            ctx.selected = new Pick(Pick.Kind.VALVE, ctx.ws.network().valves().get(v), v);
+            plan.get().addForSelection("close");
+        });
+        assertThat(plan.get().isDirty()).isTrue();
+        // the user cancels Save / Discard / Cancel: the plan may not be replaced, nothing written
+        save.get().setDiscardPrompt(() -> javax.swing.JOptionPane.CANCEL_OPTION);
+        assertThat(onEdt(() -> save.get().mayDiscard())).isFalse();
+        // Yes: saved, asking for a file (the plan is new); ".yaml" is added to a name without one
+        save.get().setDiscardPrompt(() -> javax.swing.JOptionPane.YES_OPTION);
+        assertThat(onEdt(() -> save.get().mayDiscard())).isTrue();
+        Path written = dir.resolve("valve-test.yaml");
+        assertThat(ask.asked).containsExactly("lastPlanDir SAVE_FILE");
+        assertThat(written).exists();
+        assertThat(plan.get().isDirty()).isFalse();
+        assertThat(plan.get().file()).isEqualTo(written);
+        var back = org.shutline.plan.PlanReader.read(written);
+        assertThat(back.steps()).hasSize(1);
+        assertThat(back.steps().get(0).action()).isEqualTo(new org.shutline.plan.StepAction.CloseValves(List.of("V-001"), true));
+        assertThat(recent.list()).containsExactly(SampleWorkspace.NETWORK.toAbsolutePath() + "\n" + written.toAbsolutePath());
+        assertThat(ctx.messages).last().isEqualTo("Saved " + written);
+        // no unsaved changes: no question at all
+        save.get().setDiscardPrompt(() -> {
+            throw new AssertionError("asked although nothing changed");
+        });
+        assertThat(onEdt(() -> save.get().mayDiscard())).isTrue();
+    }
+
+    private static <T> T onEdt(java.util.concurrent.Callable<T> c) throws Exception {
+        AtomicReference<T> r = new AtomicReference<>();
+        AtomicReference<Exception> e = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            try {
+                r.set(c.call());
+            } catch (Exception x) {
+                e.set(x);
+            }
+        });
+        if (e.get() != null) throw e.get();
+        return r.get();
+    }
+
     private Path mappingFile() throws Exception {
         Path mapping = dir.resolve("mapping.yaml");
         Files.writeString(mapping, """
