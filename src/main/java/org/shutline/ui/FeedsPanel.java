@@ -28,7 +28,7 @@ import org.shutline.trace.NetworkState;
  * can be shown too.
  */
 final class FeedsPanel extends JPanel {
-    private final MainWindow window;
+    private final WindowContext window;
     private final Model model = new Model();
     private final JTable table = new JTable(model);
     private final JLabel multi = new JLabel(" ");
@@ -37,7 +37,7 @@ final class FeedsPanel extends JPanel {
     private List<BitSet> exclusive = List.of();
     private long[] meters = new long[0];
 
-    FeedsPanel(MainWindow window) {
+    FeedsPanel(WindowContext window) {
         super(new BorderLayout());
         this.window = window;
         table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);

@@ -15,13 +15,13 @@ import org.shutline.model.Words;
 
 /** "Network check": the read and connectivity findings; selecting one zooms the map to it. */
 final class FindingsPanel extends JPanel {
-    private final MainWindow window;
+    private final WindowContext window;
     private final JLabel summary = new JLabel(" ");
     private List<Finding> findings = List.of();
     private final Model model = new Model();
     private final JTable table = new JTable(model);
 
-    FindingsPanel(MainWindow window) {
+    FindingsPanel(WindowContext window) {
         super(new BorderLayout());
         this.window = window;
         table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);

@@ -48,7 +48,7 @@ import org.shutline.trace.ValveSegments;
  * The region is highlighted and the valves are numbered on the map with the same numbers.
  */
 final class IncidentPanel extends JPanel {
-    private final MainWindow window;
+    private final WindowContext window;
     private final JToggleButton pick = new JToggleButton("Pick incident point");
     /** 0 = crews computed from the target (the command line's default). */
     private final JSpinner crews = new JSpinner(new SpinnerNumberModel(0, 0, 200, 1));
@@ -57,7 +57,7 @@ final class IncidentPanel extends JPanel {
     private Workspace placementFor;
     private final JTextArea text = new JTextArea();
 
-    IncidentPanel(MainWindow window) {
+    IncidentPanel(WindowContext window) {
         super(new BorderLayout());
         this.window = window;
         text.setEditable(false);

@@ -32,11 +32,12 @@ import org.shutline.render.MapStyle;
  * Buttons raise or lower the selected layer and add a context layer from a file.
  */
 final class LayersPanel extends JPanel {
-    private final MainWindow window;
+    private final WindowContext window;
     private final DefaultListModel<Integer> rows = new DefaultListModel<>();
     private final JList<Integer> list = new JList<>(rows);
 
-    LayersPanel(MainWindow window) {
+    /** @param addLayer the action behind the Add... button ({@link AddContextLayerAction}) */
+    LayersPanel(WindowContext window, javax.swing.Action addLayer) {
         super(new BorderLayout());
         this.window = window;
         setBorder(BorderFactory.createTitledBorder("Layers"));
@@ -54,12 +55,12 @@ final class LayersPanel extends JPanel {
         up.addActionListener(e -> move(true));
         JButton down = new JButton("Lower");
         down.addActionListener(e -> move(false));
-        JButton addLayer = new JButton("Add...");
-        addLayer.setToolTipText("Add context layers from a GeoPackage or a shapefile folder");
-        addLayer.addActionListener(e -> window.addContextLayer());
+        JButton add = new JButton(addLayer);
+        add.setText("Add...");
+        add.setToolTipText("Add context layers from a GeoPackage or a shapefile folder");
         b.add(up);
         b.add(down);
-        b.add(addLayer);
+        b.add(add);
         add(b, BorderLayout.SOUTH);
         setPreferredSize(new Dimension(260, 300));
     }

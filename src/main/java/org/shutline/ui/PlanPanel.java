@@ -50,7 +50,7 @@ import org.locationtech.jts.geom.Envelope;
  * YAML file atomically ({@link org.shutline.plan.PlanWriter}).
  */
 final class PlanPanel extends JPanel {
-    private final MainWindow window;
+    private final WindowContext window;
     private final JLabel title = new JLabel("No work plan open");
     private final JLabel error = new JLabel(" ");
     private final DefaultListModel<String> stepRows = new DefaultListModel<>();
@@ -68,7 +68,8 @@ final class PlanPanel extends JPanel {
     private long evaluatedEdit = -1;
     private Task<PlanEvaluation.Result> running;
 
-    PlanPanel(MainWindow window) {
+    /** @param save what the Save button does (the window's {@link SavePlanAction}) */
+    PlanPanel(WindowContext window, Runnable save) {
         super(new BorderLayout());
         this.window = window;
         steps.setName("planSteps");
@@ -97,7 +98,7 @@ final class PlanPanel extends JPanel {
         button(edit, "Remove", this::removeStep);
         button(edit, "Up", () -> move(true));
         button(edit, "Down", () -> move(false));
-        button(edit, "Save", window::savePlan);
+        button(edit, "Save", save);
         JPanel listSide = new JPanel(new BorderLayout());
         listSide.add(new JScrollPane(steps), BorderLayout.CENTER);
         listSide.add(edit, BorderLayout.SOUTH);

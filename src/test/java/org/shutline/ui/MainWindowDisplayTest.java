@@ -279,6 +279,83 @@ class MainWindowDisplayTest {
     }
 
     @Test
+    @Order(6)
+    void theMenusAndToolbarCarryTheActionsWithTheirKeys() throws Exception {
+        // the menus as docs/ui.md lists them (Mouse and keys), each item an action class registered by the window
+        List<String> menus = onEdt(() -> {
+            List<String> l = new ArrayList<>();
+            javax.swing.JMenuBar mb = win.getJMenuBar();
+            for (int i = 0; i < mb.getMenuCount(); i++) {
+                javax.swing.JMenu m = mb.getMenu(i);
+                for (int k = 0; k < m.getItemCount(); k++) {
+                    javax.swing.JMenuItem it = m.getItem(k);
+                    if (it == null) continue;
+                    javax.swing.KeyStroke ks = it.getAccelerator();
+                    l.add(m.getText() + " > " + it.getText() + (ks == null ? "" : " [" + ks + "]"));
+                }
+            }
+            return l;
+        });
+        assertThat(menus).containsExactly(
+                "File > Open network... [ctrl pressed O]",
+                "File > Open network with field mapping...",
+                "File > Open work plan... [ctrl pressed P]",
+                "File > New work plan",
+                "File > Add context layer... [ctrl pressed L]",
+                "File > Recent",
+                "File > Save work plan [ctrl pressed S]",
+                "File > Export selected step...",
+                "File > Quit [ctrl pressed Q]",
+                "View > Zoom to extent [ctrl pressed 0]",
+                "View > Zoom in [ctrl pressed EQUALS]",
+                "View > Zoom out [ctrl pressed MINUS]",
+                "View > Zoom to selection [ctrl pressed E]",
+                "View > Dark theme [shift ctrl pressed D]",
+                "Tools > Identify (click a feature) [ctrl pressed I]",
+                "Tools > Incident at a point [ctrl pressed K]",
+                "Tools > Find... [ctrl pressed F]",
+                "Plan > Next step [alt pressed DOWN]",
+                "Plan > Previous step [alt pressed UP]",
+                "Help > About Shutline");
+        List<String> buttons = onEdt(() -> {
+            List<String> l = new ArrayList<>();
+            for (Component c : ((Container) win.getContentPane().getComponent(0)).getComponents()) {
+                if (c instanceof javax.swing.JButton b) l.add(b.getText());
+            }
+            return l;
+        });
+        assertThat(buttons).containsExactly("Extent", "In", "Out", "Selection", "Previous step", "Next step");
+        // choosing items: incident mode brings its panel forward, identify leaves it, next step moves the plan on
+        onEdt(() -> {
+            menuItem("Tools", "Incident at a point").doClick(0);
+            return null;
+        });
+        assertThat(onEdt(() -> win.incidentPanel().picking())).isTrue();
+        assertThat(onEdt(() -> win.tabs().getSelectedComponent())).isSameAs(win.incidentPanel());
+        onEdt(() -> {
+            menuItem("Tools", "Identify (click a feature)").doClick(0);
+            win.planPanel().selectStep(0);
+            menuItem("Plan", "Next step").doClick(0);
+            return null;
+        });
+        assertThat(onEdt(() -> win.incidentPanel().picking())).isFalse();
+        assertThat(onEdt(() -> win.planPanel().selectedStep())).isEqualTo(1);
+        assertThat(onEdt(() -> win.tabs().getSelectedComponent())).isSameAs(win.planPanel());
+    }
+
+    private static javax.swing.JMenuItem menuItem(String menu, String item) {
+        javax.swing.JMenuBar mb = win.getJMenuBar();
+        for (int i = 0; i < mb.getMenuCount(); i++) {
+            if (!mb.getMenu(i).getText().equals(menu)) continue;
+            for (int k = 0; k < mb.getMenu(i).getItemCount(); k++) {
+                javax.swing.JMenuItem it = mb.getMenu(i).getItem(k);
+                if (it != null && it.getText().equals(item)) return it;
+            }
+        }
+        throw new AssertionError("no menu item " + menu + " > " + item);
+    }
+
+    @Test
     @Order(7)
     void closingWithUnsavedChangesAsksAndSavesOnYes() throws Exception {
         Path copy = planCopy;
