@@ -157,7 +157,10 @@ public final class PlanReader {
             if (!allowed.contains(key)) {
                 throw error(line(t.getKeyNode()), "unknown key '" + key + "' in " + what + "; allowed: " + new java.util.TreeSet<>(allowed));
             }
-            m.put(key, t.getValueNode());
+            if (m.put(key, t.getValueNode()) != null) {
+                // the composer does not apply the loader's duplicate-key rule: a repeated key would silently win
+                throw error(line(t.getKeyNode()), "key '" + key + "' is given twice in " + what);
+            }
         }
         return m;
     }

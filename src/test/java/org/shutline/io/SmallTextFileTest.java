@@ -77,4 +77,12 @@ class SmallTextFileTest {
         Files.write(f, new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF, 'a', ':', ' ', '1', '\n'});
         assertThat(SmallTextFile.read(f, "plan file", 1000)).isEqualTo("a: 1\n");
     }
+
+    @Test
+    void aRepeatedKeyInAPlanIsRefusedWithItsLine() throws Exception {
+        Path plan = dir.resolve("twice.yaml");
+        Files.writeString(plan, "project: One\nproject: Two\nphases: []\n");
+        assertThatThrownBy(() -> PlanReader.read(plan)).isInstanceOf(PlanException.class)
+                .hasMessageContaining("twice.yaml").hasMessageContaining("key 'project' is given twice");
+    }
 }
