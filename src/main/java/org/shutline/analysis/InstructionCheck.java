@@ -105,9 +105,8 @@ public final class InstructionCheck {
         for (String id : stop) {
             Integer st = stations.get(id);
             if (st == null) throw new UnverifiedInstructionException(query, "station " + id + " is not in the network");
-            StationStop.Result how = null;
-            for (StationStop.Result r : stops) if (r.stationId().equals(id)) how = r;
-            if (how != null && how.stoppable() && how.isolation() != null && how.isolation().isolable()) {
+            StationStop.Result how = StationStop.Result.of(List.copyOf(stops), id);
+            if (how != null && how.byValves()) {
                 for (String v : how.valves()) t = close(t, v, query);
             } else {
                 t = t.withStationInService(st, false);
@@ -210,16 +209,7 @@ public final class InstructionCheck {
             }
         }
         Outcome o = apply(idx, List.of(), stop, List.of(), shut, query);
-        int sys = state.graph().systemIndex(r.systemId());
-        if (sys >= 0) {
-            for (int n = 0; n < state.nodeCount(); n++) {
-                int seg = segs.nodeSegment(n);
-                if (seg >= 0 && o.live.get(n) && Restoration.segmentSystem(segs, seg) == sys) {
-                    throw new UnverifiedInstructionException(query, "system " + r.systemId() + " still has gas after the shut-off (node at "
-                            + state.nodeX(n) + ", " + state.nodeY(n) + ")");
-                }
-            }
-        }
+        deadSystem(o, r.systemId(), query, "the over-pressure shut-off of " + r.systemId());
         sameServices(o.off, ids(r.off()), query, "the over-pressure shut-off of " + r.systemId());
         sameMeters(o.off, r.metersOff(), query, "the over-pressure shut-off of " + r.systemId());
         Set<String> base = ids(r.off());

@@ -102,7 +102,7 @@ final class IsolationCore {
             if (sg.feedsInto(sg.stationLink(st), c.region, before)) {
                 c.stations.add(st);
                 StationStop.Result stop = st == replaced ? replacement : iso.stationStop(st);
-                if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+                if (stop != null && stop.byValves()) {
                     // the instruction closes the stop's valves: its inlet-side region goes dead with everything fed only through it
                     if (blocked == c.region) blocked = (BitSet) c.region.clone();
                     blocked.or(stop.isolation().region());

@@ -120,7 +120,7 @@ public final class OverpressureShutoff {
         lost.andNot(after);
         BitSet off = segs.servicesOf(lost);
         for (int i = 0; i < feeds.size(); i++) {
-            if (feeds.get(i).isStation()) feeds.set(i, feeds.get(i).withFallbacks(fallbacks(segs, feeds, i, stopped, shutSources, lost)));
+            if (feeds.get(i).isStation()) feeds.set(i, feeds.get(i).withFallbacks(fallbacks(segs, feeds, i, stopped, shutSources, before, lost)));
         }
         List<Service> all = net.services();
         List<String> ordered = new ArrayList<>(), critical = new ArrayList<>(), rest = new ArrayList<>();
@@ -140,7 +140,7 @@ public final class OverpressureShutoff {
      * against the whole shut-off (every other feed stopped as planned).
      */
     private static List<Isolation.Fallback> fallbacks(ValveSegments segs, List<Feed> feeds, int i, BitSet stopped, BitSet shutSources,
-                                                      BitSet lost) {
+                                                      BitSet before, BitSet lost) {
         SegmentGraph sg = segs.graph();
         NetworkState s = segs.state();
         Feed feed = feeds.get(i);
@@ -150,6 +150,13 @@ public final class OverpressureShutoff {
             for (Isolation.ValveStep v : feeds.get(j).upstream().valves()) others.set(sg.valveLink(v.valve()));
         }
         int st = stationIndex(s, feed.id());
+        java.util.Map<String, List<Integer>> valveIndex = new java.util.HashMap<>();
+        for (Isolation.Fallback f : feed.upstream().fallbacks()) for (String id : f.valves()) valveIndex.putIfAbsent(id, new ArrayList<>());
+        for (String id : feed.upstream().valveIds()) valveIndex.putIfAbsent(id, new ArrayList<>());
+        for (int v = 0; v < s.valveCount(); v++) {
+            List<Integer> at = valveIndex.get(s.valveId(v));
+            if (at != null) at.add(v);
+        }
         List<Isolation.Fallback> out = new ArrayList<>();
         for (Isolation.Fallback f : feed.upstream().fallbacks()) {
             BitSet closed = (BitSet) others.clone();
@@ -161,8 +168,8 @@ public final class OverpressureShutoff {
                 for (String id : feed.upstream().valveIds()) if (!id.equals(f.valveId())) valves.add(id);
                 stop.set(st);
             }
-            for (int v = 0; v < s.valveCount(); v++) if (valves.contains(s.valveId(v)) && sg.valveLink(v) >= 0) closed.set(sg.valveLink(v));
-            BitSet lostF = segs.graph().reachFromSources(null, null);
+            for (String id : valves) for (int v : valveIndex.get(id)) if (sg.valveLink(v) >= 0) closed.set(sg.valveLink(v));
+            BitSet lostF = (BitSet) before.clone();
             lostF.andNot(sg.reach(null, closed, stop, shutSources));
             BitSet add = (BitSet) lostF.clone();
             add.andNot(lost);

@@ -76,6 +76,18 @@ public final class StationStop {
         @Override public BitSet ownDistrict() { return (BitSet) ownDistrict.clone(); }
         @Override public BitSet otherOff() { return (BitSet) otherOff.clone(); }
 
+        /** True when closing {@link #valves()} stops the station (else it is stopped at the station itself). */
+        public boolean byValves() {
+            return stoppable && isolation != null && isolation.isolable();
+        }
+
+        /** The stop of station {@code id} in {@code stops}, or null. */
+        public static Result of(List<Result> stops, String id) {
+            Result found = null;
+            for (Result r : stops) if (r.stationId().equals(id)) found = r;
+            return found;
+        }
+
         /** One line for an operator: what to close and what else it does. */
         public String summary() {
             if (isolation == null) return note;

@@ -210,9 +210,8 @@ public final class ValveOrder {
             List<String> valves = new ArrayList<>();
             List<String> atStation = new ArrayList<>();
             for (String id : f.stationsToStop()) {
-                StationStop.Result stop = null;
-                for (StationStop.Result x : f.stationStops()) if (x.stationId().equals(id)) stop = x;
-                if (stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+                StationStop.Result stop = StationStop.Result.of(f.stationStops(), id);
+                if (stop != null && stop.byValves()) {
                     for (String vid : stop.valves()) if (!valves.contains(vid)) valves.add(vid);
                 } else {
                     atStation.add(id);

@@ -208,9 +208,8 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         for (String sid : r.stationsToStop()) {
             for (int i = 0; i < stations.size(); i++) {
                 if (!stations.get(i).id().equals(sid)) continue;
-                StationStop.Result stop = null;
-                for (StationStop.Result x0 : r.stationStops()) if (x0.stationId().equals(sid)) stop = x0;
-                boolean byValves = stop != null && stop.stoppable() && stop.isolation() != null && stop.isolation().isolable();
+                StationStop.Result stop = StationStop.Result.of(r.stationStops(), sid);
+                boolean byValves = stop != null && stop.byValves();
                 // stopped as the instruction says: by its stop's valves (closed above with the field order), else at the station
                 if (!byValves) after = after.withStationInService(i, false);
                 Station st = stations.get(i);

@@ -100,7 +100,7 @@ public final class BruteForceOutages {
             int l = sg.stationLink(st);
             if (!sg.feedsInto(l, region, before)) continue;
             StationStop.Result stop = stops.stationStop(st);
-            if (stop.stoppable() && stop.isolation() != null && stop.isolation().isolable()) {
+            if (stop.byValves()) {
                 blocked.or(stop.isolation().region());
             } else {
                 if (blockedLinks == null) blockedLinks = new BitSet(sg.linkCount());

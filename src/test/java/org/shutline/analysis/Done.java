@@ -9,9 +9,8 @@ final class Done {
     static NetworkState isolation(NetworkState s, Isolation.Result r) {
         for (Isolation.ValveStep v : r.valves()) s = s.withValveClosed(v.valve(), true);
         for (String id : r.stationsToStop()) {
-            StationStop.Result how = null;
-            for (StationStop.Result x : r.stationStops()) if (x.stationId().equals(id)) how = x;
-            if (how != null && how.stoppable() && how.isolation() != null && how.isolation().isolable()) {
+            StationStop.Result how = StationStop.Result.of(r.stationStops(), id);
+            if (how != null && how.byValves()) {
                 for (Isolation.ValveStep v : how.isolation().valves()) s = s.withValveClosed(v.valve(), true);
             } else {
                 for (int st = 0; st < s.stationCount(); st++) if (s.stationId(st).equals(id)) s = s.withStationInService(st, false);
