@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.locationtech.jts.geom.Geometry;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.analysis.hazard.HazardCheck;
 import org.shutline.analysis.hazard.StepContext;
 import org.shutline.model.Network;
@@ -61,7 +61,7 @@ public final class PlanEvaluation {
     /** One step's outcome. */
     public record StepResult(Step step, int servicesOff, long metersOff, Map<ServiceClass, Integer> servicesOffByClass,
                              List<CriticalOff> criticalOff, List<String> wentOff, List<String> cameBack,
-                             Map<String, List<String>> districtFeeds, List<Hazard> hazards, List<Hazard> continuing,
+                             Map<String, List<String>> districtFeeds, List<Finding> hazards, List<Finding> continuing,
                              List<String> notices, Lazy<Geometry> gasOffExtent, BitSet servicesOffSet, Suggestion suggestion) {
         public StepResult {
             servicesOffByClass = Map.copyOf(servicesOffByClass);
@@ -84,7 +84,7 @@ public final class PlanEvaluation {
 
         /** True when a hazard new at this step is critical and not mitigated. */
         public boolean hasCritical() {
-            return hazards.stream().anyMatch(Hazard::critical);
+            return hazards.stream().anyMatch(Finding::critical);
         }
     }
 
@@ -120,7 +120,7 @@ public final class PlanEvaluation {
     public record PhaseResult(Phase phase, int index, double customerHours, int servicesOffAtEnd) {
     }
 
-    public record Result(PlanStates states, List<Hazard> recordedHazards, List<StepResult> steps, List<PhaseResult> phases) {
+    public record Result(PlanStates states, List<Finding> recordedHazards, List<StepResult> steps, List<PhaseResult> phases) {
         public Result {
             recordedHazards = List.copyOf(recordedHazards);
             steps = List.copyOf(steps);
@@ -142,7 +142,7 @@ public final class PlanEvaluation {
         FeedTrace.Result baseTrace = FeedTrace.run(baseSegs, Progress.NONE);
         BitSet baseFed = baseTrace.fedServices();
         BitSet baseLive = baseTrace.liveEdges();
-        List<Hazard> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, baseSegs, settings), null);
+        List<Finding> recorded = run(checks, new StepContext(null, base, baseTrace, baseTrace, baseTrace, baseSegs, settings), null);
         Set<String> active = keys(recorded);
         Set<String> activeMitigated = new HashSet<>();
         org.shutline.plan.Attendance attendance = org.shutline.plan.Attendance.of(ps.plan());
@@ -156,10 +156,10 @@ public final class PlanEvaluation {
             ValveSegments segs = ValveSegments.build(st.after());
             FeedTrace.Result tr = FeedTrace.run(segs, Progress.NONE);
             StepContext ctx = new StepContext(st, base, baseTrace, prevTrace, tr, segs, settings);
-            List<Hazard> all = run(checks, ctx, attendance);
-            List<Hazard> fresh = new ArrayList<>();
-            List<Hazard> cont = new ArrayList<>();
-            for (Hazard h : all) {
+            List<Finding> all = run(checks, ctx, attendance);
+            List<Finding> fresh = new ArrayList<>();
+            List<Finding> cont = new ArrayList<>();
+            for (Finding h : all) {
                 boolean was = active.contains(h.key()) && !(activeMitigated.contains(h.key()) && !h.mitigated());
                 (was ? cont : fresh).add(h);
             }
@@ -186,10 +186,10 @@ public final class PlanEvaluation {
         return new Result(ps, recorded, out, phases(ps, out));
     }
 
-    private static List<Hazard> run(List<HazardCheck> checks, StepContext ctx, org.shutline.plan.Attendance attendance) {
-        List<Hazard> out = new ArrayList<>();
+    private static List<Finding> run(List<HazardCheck> checks, StepContext ctx, org.shutline.plan.Attendance attendance) {
+        List<Finding> out = new ArrayList<>();
         for (HazardCheck c : checks) {
-            for (Hazard h : c.check(ctx)) {
+            for (Finding h : c.check(ctx)) {
                 if (attendance != null && c.mitigatedByAttendance()) h = mitigate(h, ctx, attendance);
                 out.add(h);
             }
@@ -198,7 +198,7 @@ public final class PlanEvaluation {
     }
 
     /** The hazard marked mitigated when one of its features is a station attended at this step. */
-    private static Hazard mitigate(Hazard h, StepContext ctx, org.shutline.plan.Attendance attendance) {
+    private static Finding mitigate(Finding h, StepContext ctx, org.shutline.plan.Attendance attendance) {
         for (String f : h.features()) {
             int by = attendance.attendStep(ctx.stepNumber(), f);
             if (by > 0) return h.withMitigation("station " + f + " attended by a qualified person able to shut it down (attend step " + by + ")");
@@ -206,21 +206,21 @@ public final class PlanEvaluation {
         return h;
     }
 
-    private static Set<String> keys(List<Hazard> hs) {
+    private static Set<String> keys(List<Finding> hs) {
         Set<String> k = new HashSet<>();
-        for (Hazard h : hs) k.add(h.key());
+        for (Finding h : hs) k.add(h.key());
         return k;
     }
 
     /** Keys of the mitigated hazards: one mitigated at a step and not at the next is new again there (the attendance ended). */
-    private static Set<String> mitigatedKeys(List<Hazard> hs) {
+    private static Set<String> mitigatedKeys(List<Finding> hs) {
         Set<String> k = new HashSet<>();
-        for (Hazard h : hs) if (h.mitigated()) k.add(h.key());
+        for (Finding h : hs) if (h.mitigated()) k.add(h.key());
         return k;
     }
 
     private static StepResult result(StepState st, Network net, BitSet off, BitSet prevOff, FeedTrace.Result tr,
-                                     List<Hazard> fresh, List<Hazard> cont, Lazy<Geometry> gasOff, Suggestion sug) {
+                                     List<Finding> fresh, List<Finding> cont, Lazy<Geometry> gasOff, Suggestion sug) {
         List<Service> svc = net.services();
         Map<ServiceClass, Integer> byClass = new EnumMap<>(ServiceClass.class);
         List<CriticalOff> crit = new ArrayList<>();

@@ -4,8 +4,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -13,11 +11,11 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.shutline.model.ContextLayer;
 import org.shutline.model.Finding;
+import org.shutline.report.FindingSection;
 import org.shutline.model.Main;
 import org.shutline.model.Network;
 import org.shutline.model.Service;
 import org.shutline.model.Severity;
-import org.shutline.model.Words;
 
 /**
  * The result of {@code shutline check} for one network: feature counts per layer (the
@@ -105,17 +103,6 @@ public final class CheckReport {
         return hasErrors() ? 1 : 0;
     }
 
-    /** Findings grouped by code: groups by falling severity (the group's highest), then code. */
-    List<List<Finding>> groups() {
-        Map<String, List<Finding>> by = new TreeMap<>();
-        for (Finding f : findings) by.computeIfAbsent(f.code(), k -> new ArrayList<>()).add(f);
-        List<List<Finding>> g = new ArrayList<>(by.values());
-        g.sort(Comparator.comparing((List<Finding> l) -> l.stream().map(Finding::severity)
-            .max(Comparator.naturalOrder()).orElseThrow()).reversed()
-            .thenComparing(l -> l.get(0).code()));
-        return g;
-    }
-
     public String toText() {
         StringBuilder b = new StringBuilder();
         b.append("Network: ").append(source).append('\n').append("CRS: ").append(crs).append("\n\n");
@@ -128,21 +115,8 @@ public final class CheckReport {
         for (Finding f : findings) bySeverity[f.severity().ordinal()]++;
         b.append(String.format(Locale.ROOT, "%nFindings: %d (%d critical, %d errors, %d warnings, %d notes)%n",
             findings.size(), bySeverity[3], bySeverity[2], bySeverity[1], bySeverity[0]));
-        for (List<Finding> g : groups()) {
-            b.append(String.format(Locale.ROOT, "%n  %s  %s  (%d)%n", g.get(0).code(),
-                Words.word(g.get(0).severity()).toUpperCase(Locale.ROOT), g.size()));
-            for (int i = 0; i < Math.min(EXAMPLES, g.size()); i++) b.append("    ").append(line(g.get(i))).append('\n');
-            if (g.size() > EXAMPLES) b.append("    ... and ").append(g.size() - EXAMPLES).append(" more\n");
-        }
+        if (!findings.isEmpty()) b.append('\n').append(FindingSection.text(findings, EXAMPLES, "  "));
         b.append('\n').append(hasErrors() ? "Result: errors found (exit 1)" : "Result: no errors (exit 0)").append('\n');
-        return b.toString();
-    }
-
-    private static String line(Finding f) {
-        StringBuilder b = new StringBuilder();
-        if (!f.features().isEmpty()) b.append(String.join(", ", f.features())).append(": ");
-        b.append(f.message());
-        if (f.hasLocation()) b.append(String.format(Locale.ROOT, " (at %.1f, %.1f)", f.x(), f.y()));
         return b.toString();
     }
 
@@ -157,22 +131,7 @@ public final class CheckReport {
         systems.forEach((k, v) -> s.putObject(k).put("mains", v.mains()).put("services", v.services())
             .put("meters", v.meters()));
         ArrayNode fs = root.putArray("findings");
-        for (Finding f : findings) {
-            ObjectNode o = fs.addObject();
-            o.put("code", f.code());
-            o.put("severity", Words.word(f.severity()));
-            ArrayNode ids = o.putArray("features");
-            f.features().forEach(ids::add);
-            if (f.hasLocation()) {
-                o.put("x", f.x());
-                o.put("y", f.y());
-            } else {
-                o.putNull("x");
-                o.putNull("y");
-            }
-            o.put("message", f.message());
-            o.put("layer", f.layer());
-        }
+        for (Finding f : findings) FindingSection.json(fs, f);
         root.put("errors", hasErrors());
         try {
             return om.writeValueAsString(root) + "\n";

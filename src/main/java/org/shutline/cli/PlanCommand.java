@@ -12,7 +12,8 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
+import org.shutline.report.FindingSection;
 import org.shutline.io.AtomicFiles;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
@@ -106,9 +107,9 @@ public final class PlanCommand implements Callable<Integer> {
         return out;
     }
 
-    static String hazardCodes(List<Hazard> hs) {
+    static String hazardCodes(List<Finding> hs) {
         List<String> s = new ArrayList<>();
-        for (Hazard h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + (h.mitigated() ? ", mitigated" : "") + ")");
+        for (Finding h : hs) s.add(h.code() + " (" + Words.word(h.severity()) + (h.mitigated() ? ", mitigated" : "") + ")");
         return String.join("; ", s);
     }
 
@@ -119,8 +120,7 @@ public final class PlanCommand implements Callable<Integer> {
                 .append("\nPlan file: ").append(planFile).append("\n\n");
         if (!r.recordedHazards().isEmpty()) {
             sb.append("In the network as recorded (before step 1):\n");
-            for (Hazard h : r.recordedHazards()) hazard(sb, h);
-            sb.append('\n');
+            sb.append(FindingSection.text(r.recordedHazards(), Integer.MAX_VALUE, "  ")).append('\n');
         }
         sb.append(String.format(Locale.ROOT, "%4s %-5s %-58s %8s %7s %8s  %s%n", "step", "phase", "action", "svc off", "mtr off", "crit off", "hazards (new at this step)"));
         for (PlanEvaluation.StepResult s : r.steps()) {
@@ -142,7 +142,7 @@ public final class PlanCommand implements Callable<Integer> {
             if (!any) sb.append("\nFindings by step:\n");
             any = true;
             sb.append("\nStep ").append(s.step().number()).append(": ").append(s.step().describe()).append('\n');
-            for (Hazard h : s.hazards()) hazard(sb, h);
+            sb.append(FindingSection.text(s.hazards(), Integer.MAX_VALUE, "  "));
             for (String n : s.notices()) sb.append("  note: ").append(n).append('\n');
             for (PlanEvaluation.CriticalOff c : s.criticalOff()) {
                 sb.append("  critical customer off: ").append(c.serviceId()).append(" ").append(c.kind())
@@ -156,7 +156,7 @@ public final class PlanCommand implements Callable<Integer> {
                 }
             }
         }
-        long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(Hazard::critical).count();
+        long crit = r.steps().stream().flatMap(s -> s.hazards().stream()).filter(Finding::critical).count();
         int dataErrors = DataErrors.current();
         String data = dataErrors == 0 ? "" : "; the network read gave " + dataErrors
                 + (dataErrors == 1 ? " data error" : " data errors") + " (see the line on stderr and `shutline check`)";
@@ -164,28 +164,6 @@ public final class PlanCommand implements Callable<Integer> {
                 : "Result: " + crit + " critical hazard(s) raised by the plan" + data + " (exit 1).").append('\n');
         sb.append('\n').append(Caution.TEXT).append('\n');
         return sb.toString();
-    }
-
-    private static void hazard(StringBuilder sb, Hazard h) {
-        sb.append("  [").append(Words.word(h.severity()).toUpperCase(Locale.ROOT)).append("] ").append(h.code()).append(": ")
-                .append(h.message()).append("\n    action: ").append(h.action()).append('\n');
-        if (h.mitigated()) sb.append("    mitigated: ").append(h.mitigatedBy()).append('\n');
-    }
-
-    static ObjectNode hazardJson(ArrayNode a, Hazard h) {
-        ObjectNode o = a.addObject();
-        o.put("code", h.code());
-        o.put("severity", Words.word(h.severity()));
-        o.put("step", h.step());
-        o.set("features", Json.strings(h.features()));
-        if (!Double.isNaN(h.x())) {
-            o.put("x", h.x());
-            o.put("y", h.y());
-        }
-        o.put("message", h.message());
-        o.put("action", h.action());
-        if (h.mitigated()) o.put("mitigated_by", h.mitigatedBy());
-        return o;
     }
 
     static ObjectNode json(PlanEvaluation.Result r) {
@@ -196,7 +174,7 @@ public final class PlanCommand implements Callable<Integer> {
         root.put("critical", r.hasCritical());
         root.put("data_errors", DataErrors.current());
         ArrayNode rec = root.putArray("recorded_hazards");
-        for (Hazard h : r.recordedHazards()) hazardJson(rec, h);
+        for (Finding h : r.recordedHazards()) FindingSection.json(rec, h);
         ArrayNode steps = root.putArray("steps");
         for (PlanEvaluation.StepResult s : r.steps()) {
             ObjectNode o = steps.addObject();
@@ -217,9 +195,9 @@ public final class PlanCommand implements Callable<Integer> {
             ObjectNode feeds = o.putObject("district_feeds");
             for (Map.Entry<String, List<String>> e : new java.util.TreeMap<>(s.districtFeeds()).entrySet()) feeds.set(e.getKey(), Json.strings(e.getValue()));
             ArrayNode hz = o.putArray("hazards");
-            for (Hazard h : s.hazards()) hazardJson(hz, h);
+            for (Finding h : s.hazards()) FindingSection.json(hz, h);
             ArrayNode cont = o.putArray("continuing");
-            for (Hazard h : s.continuing()) cont.add(h.key());
+            for (Finding h : s.continuing()) cont.add(h.key());
             o.set("notices", Json.strings(s.notices()));
             if (s.suggestion() != null) {
                 o.set("suggested_order", Json.strings(s.suggestion().order()));
@@ -261,9 +239,9 @@ public final class PlanCommand implements Callable<Integer> {
 
     static String hazardsCsv(PlanEvaluation.Result r) {
         List<List<String>> rows = new ArrayList<>();
-        List<Hazard> all = new ArrayList<>(r.recordedHazards());
+        List<Finding> all = new ArrayList<>(r.recordedHazards());
         for (PlanEvaluation.StepResult s : r.steps()) all.addAll(s.hazards());
-        for (Hazard h : all) {
+        for (Finding h : all) {
             rows.add(List.of(Integer.toString(h.step()), h.code(), Words.word(h.severity()), String.join(" ", h.features()),
                     Double.isNaN(h.x()) ? "" : String.format(Locale.ROOT, "%.2f", h.x()), Double.isNaN(h.y()) ? "" : String.format(Locale.ROOT, "%.2f", h.y()),
                     h.message(), h.action(), h.mitigated() ? h.mitigatedBy() : ""));

@@ -1,5 +1,6 @@
 package org.shutline.render;
 
+import org.shutline.model.Finding;
 import java.awt.BasicStroke;
 import java.awt.Font;
 import java.awt.FontMetrics;

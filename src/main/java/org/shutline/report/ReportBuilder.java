@@ -17,7 +17,7 @@ import java.util.Set;
 import org.jfree.chart.JFreeChart;
 import org.locationtech.jts.geom.Envelope;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.io.GeoPackageWriter;
 import org.shutline.io.WriteLayer;
 import org.shutline.model.Network;
@@ -228,7 +228,7 @@ public final class ReportBuilder {
                     view.ring().centerY() - r, view.ring().centerY() + r));
         }
         if (e.isNull()) {
-            for (Hazard h : view.hazards()) if (Double.isFinite(h.x()) && Double.isFinite(h.y())) e.expandToInclude(h.x(), h.y());
+            for (Finding h : view.hazards()) if (Double.isFinite(h.x()) && Double.isFinite(h.y())) e.expandToInclude(h.x(), h.y());
         }
         if (e.isNull()) return new MapScene(network).extent();
         double min = network.crs().unit().fromMetres(MIN_AREA_M);
@@ -245,7 +245,7 @@ public final class ReportBuilder {
         if (!view.gasOff().isEmpty()) o = o.withGasOff(List.of(GasOffArea.of(view.gasOff())));
         o = o.withValvesToOperate(view.valves());
         List<HazardMark> marks = new ArrayList<>();
-        for (Hazard h : view.hazards()) {
+        for (Finding h : view.hazards()) {
             if (Double.isFinite(h.x()) && Double.isFinite(h.y())) marks.add(HazardMark.of(h.x(), h.y(), h.severity(), h.code()));
         }
         o = o.withHazards(marks);
@@ -339,7 +339,7 @@ public final class ReportBuilder {
         out.addAll(TableSheets.layout("Customers off gas (" + Plural.of(view.servicesOff().cardinality(), "service") + ", "
                 + Plural.of(view.metersOff(), "meter") + ")", sub, FieldLists.CUSTOMER_HEADER, cr, f));
         if (!view.hazards().isEmpty()) out.addAll(TableSheets.layout("Hazards and actions", sub,
-                List.of("code", "severity", "features", "what is wrong", "action"), hazardRows(), f));
+                FindingSection.HEADER, FindingSection.rows(view.hazards()), f));
         if (plan != null) {
             out.add(Charts.sheet(stepsChart(), "Services and meters off gas per step"));
             out.add(Charts.sheet(phasesChart(), "Customer-hours off gas per phase"));
@@ -362,15 +362,6 @@ public final class ReportBuilder {
             });
         }
         return out;
-    }
-
-    private List<List<String>> hazardRows() {
-        List<List<String>> rows = new ArrayList<>();
-        for (Hazard h : view.hazards()) {
-            rows.add(List.of(h.code(), h.severity().name().toLowerCase(Locale.ROOT), String.join(" ", h.features()),
-                    h.message(), h.action()));
-        }
-        return rows;
     }
 
     private JFreeChart stepsChart() {

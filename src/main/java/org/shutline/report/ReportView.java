@@ -17,7 +17,7 @@ import org.shutline.analysis.ValveOrder;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ValveDoubt;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.model.Operability;
 import org.shutline.model.Severity;
 import org.shutline.model.Station;
@@ -41,7 +41,7 @@ import org.shutline.trace.NetworkState;
  * part comes from.
  */
 public record ReportView(Kind kind, String subject, String phase, int step, NetworkState state, Geometry gasOff,
-                         List<OperatedValve> valves, BitSet servicesOff, List<Hazard> hazards, IsolationRing ring,
+                         List<OperatedValve> valves, BitSet servicesOff, List<Finding> hazards, IsolationRing ring,
                          FeedTrace.Result traceAfter) {
     /** What the view is of: a plan step, an incident, or a plain network state (a map of what is shown). */
     public enum Kind { STEP, INCIDENT, STATE }
@@ -135,7 +135,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
             PlanEvaluation.StepResult sr = r.steps().get(i);
             Phase ph = r.states().plan().phases().get(st.step().phase());
             List<OperatedValve> vs = stepValves(st, sr, options);
-            List<Hazard> hz = new ArrayList<>(sr.hazards());
+            List<Finding> hz = new ArrayList<>(sr.hazards());
             hz.addAll(sr.continuing());
             String subject = "Step " + number + ": " + st.step().describe()
                     + (st.step().note() == null || st.step().note().isBlank() ? "" : " (" + st.step().note() + ")");
@@ -203,7 +203,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
                     f == null ? "" : f.text()));
             after = after.withValveClosed(v.valve(), true);
         }
-        List<Hazard> hz = new ArrayList<>();
+        List<Finding> hz = new ArrayList<>();
         List<Station> stations = state.network().stations();
         for (String sid : r.stationsToStop()) {
             for (int i = 0; i < stations.size(); i++) {
@@ -215,7 +215,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
                 Station st = stations.get(i);
                 double sx = st.geometry() == null ? Double.NaN : st.geometry().getX();
                 double sy = st.geometry() == null ? Double.NaN : st.geometry().getY();
-                hz.add(new Hazard("station-feeds-zone", Severity.CRITICAL, 0, List.of(sid), sx, sy,
+                hz.add(Finding.hazard("station-feeds-zone", Severity.CRITICAL, 0, List.of(sid), sx, sy,
                         "Valves alone cannot isolate the incident: " + r.reason(),
                         "Stop station " + sid + (byValves ? " (close " + String.join(", ", stop.valves()) + ")" : " at the station (no valve on record stops it)")
                                 + " and watch its outlet pressure."));

@@ -10,7 +10,7 @@ import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.MultiPolygon;
 import org.locationtech.jts.geom.Polygon;
 import org.shutline.analysis.GasOffExtent;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.io.WriteLayer;
 import org.shutline.io.WriteLayer.Column;
 import org.shutline.io.WriteLayer.ColumnType;
@@ -189,15 +189,16 @@ public final class ResultLayers {
         GeometryFactory gf = new GeometryFactory();
         List<Geometry> gs = new ArrayList<>();
         List<List<Object>> rows = new ArrayList<>();
-        for (Hazard h : v.hazards()) {
+        for (Finding h : v.hazards()) {
             boolean at = Double.isFinite(h.x()) && Double.isFinite(h.y());
             gs.add(at ? gf.createPoint(new org.locationtech.jts.geom.Coordinate(h.x(), h.y())) : null);
             rows.add(row(v, h.code(), h.severity().name().toLowerCase(Locale.ROOT), String.join(" ", h.features()),
-                    h.message(), h.action()));
+                    h.message(), h.action(), h.mitigatedBy()));
         }
         return WriteLayer.of("hazards", GeometryKind.POINT, withView(new Column("code", ColumnType.TEXT),
                 new Column("severity", ColumnType.TEXT), new Column("features", ColumnType.TEXT),
-                new Column("message", ColumnType.TEXT), new Column("action", ColumnType.TEXT)), gs, rows);
+                new Column("message", ColumnType.TEXT), new Column("action", ColumnType.TEXT),
+                new Column("mitigated_by", ColumnType.TEXT)), gs, rows);
     }
 
     static WriteLayer sheds(ReportView v) {

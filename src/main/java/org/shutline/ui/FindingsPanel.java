@@ -1,71 +1,69 @@
 package org.shutline.ui;
 
 import java.awt.BorderLayout;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JTable;
-import javax.swing.ListSelectionModel;
-import javax.swing.table.AbstractTableModel;
+import org.shutline.analysis.PlanEvaluation;
 import org.shutline.model.Finding;
 import org.shutline.model.Severity;
-import org.shutline.model.Words;
 
-/** "Network check": the read and connectivity findings; selecting one zooms the map to it. */
+/**
+ * "Findings": the read and connectivity findings of the network and, once a work plan
+ * has been evaluated, the hazards it raises at every step, in one {@link FindingTable};
+ * selecting one zooms the map to it.
+ */
 final class FindingsPanel extends JPanel {
-    private final WindowContext window;
     private final JLabel summary = new JLabel(" ");
-    private List<Finding> findings = List.of();
-    private final Model model = new Model();
-    private final JTable table = new JTable(model);
+    private final FindingTable table;
+    private List<Finding> data = List.of();
+    private List<Finding> plan = List.of();
 
     FindingsPanel(WindowContext window) {
         super(new BorderLayout());
-        this.window = window;
-        table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
-        table.setAutoCreateRowSorter(true);
-        table.getColumnModel().getColumn(0).setPreferredWidth(70);
-        table.getColumnModel().getColumn(1).setPreferredWidth(150);
-        table.getColumnModel().getColumn(2).setPreferredWidth(110);
-        table.getColumnModel().getColumn(3).setPreferredWidth(420);
-        table.getSelectionModel().addListSelectionListener(e -> {
-            if (e.getValueIsAdjusting()) return;
-            int r = table.getSelectedRow();
-            if (r < 0) return;
-            Finding f = findings.get(table.convertRowIndexToModel(r));
+        table = new FindingTable(f -> {
             if (f.hasLocation()) window.zoomToPoint(f.x(), f.y(), f.code() + ": " + f.message());
             else window.status(f.code() + ": " + f.message());
         });
+        table.setName("findingsTable");
         add(summary, BorderLayout.NORTH);
         add(new JScrollPane(table), BorderLayout.CENTER);
     }
 
+    /** The findings of a newly opened network (the plan's hazards are cleared). */
     void show(List<Finding> all) {
-        findings = List.copyOf(all);
-        long err = all.stream().filter(f -> f.severity() == Severity.ERROR).count();
-        long warn = all.stream().filter(f -> f.severity() == Severity.WARNING).count();
-        summary.setText(String.format(Locale.ROOT, " %d findings: %d errors, %d warnings, %d notes. Select one to zoom to it.",
-                all.size(), err, warn, all.size() - err - warn));
-        model.fireTableDataChanged();
+        data = List.copyOf(all);
+        plan = List.of();
+        refresh();
     }
 
-    private final class Model extends AbstractTableModel {
-        private final String[] cols = {"severity", "code", "features", "message"};
-
-        @Override public int getRowCount() { return findings.size(); }
-        @Override public int getColumnCount() { return cols.length; }
-        @Override public String getColumnName(int c) { return cols[c]; }
-
-        @Override public Object getValueAt(int r, int c) {
-            Finding f = findings.get(r);
-            return switch (c) {
-                case 0 -> Words.word(f.severity());
-                case 1 -> f.code();
-                case 2 -> String.join(" ", f.features());
-                default -> f.message();
-            };
+    /** Adds the hazards of an evaluated plan (as recorded, then every step's new ones); null clears them. */
+    void showPlan(PlanEvaluation.Result r) {
+        List<Finding> hz = new ArrayList<>();
+        if (r != null) {
+            hz.addAll(r.recordedHazards());
+            for (PlanEvaluation.StepResult s : r.steps()) hz.addAll(s.hazards());
         }
+        plan = hz;
+        refresh();
+    }
+
+    private void refresh() {
+        List<Finding> all = new ArrayList<>(data);
+        all.addAll(plan);
+        table.show(all);
+        long crit = all.stream().filter(f -> f.severity() == Severity.CRITICAL).count();
+        long err = all.stream().filter(f -> f.severity() == Severity.ERROR).count();
+        long warn = all.stream().filter(f -> f.severity() == Severity.WARNING).count();
+        summary.setText(String.format(Locale.ROOT, " %d findings (%d of the network, %d of the plan): %d critical, %d errors, %d warnings,"
+                + " %d notes. Select one to zoom to it.", all.size(), data.size(), plan.size(), crit, err, warn,
+                all.size() - crit - err - warn));
+    }
+
+    List<String> rowTexts() {
+        return table.rowTexts();
     }
 }

@@ -129,7 +129,7 @@ public final class MainWindow extends JFrame {
         facts.setLineWrap(true);
         facts.setWrapStyleWord(true);
         facts.setName("facts");
-        tabs.addTab("Network check", findings);
+        tabs.addTab("Findings", findings);
         tabs.addTab("Station feeds", feeds);
         tabs.addTab("Work plan", plan);
         tabs.addTab("Incident", incident);
@@ -245,7 +245,7 @@ public final class MainWindow extends JFrame {
         // data problems reach the window as they reach every command: error-level findings are
         // counted on the status line and on the check tab, so no answer looks clean by default
         long errors = w.findings().stream().filter(f -> f.severity().compareTo(Severity.ERROR) >= 0).count();
-        tabs.setTitleAt(tabs.indexOfComponent(findings), errors == 0 ? "Network check" : "Network check (" + Plural.of(errors, "error") + ")");
+        tabs.setTitleAt(tabs.indexOfComponent(findings), errors == 0 ? "Findings" : "Findings (" + Plural.of(errors, "data error") + ")");
         status.message(String.format(Locale.ROOT, "%s: %d mains, %d valves, %d stations, %d services; CRS %s%s",
                 n.sourceName(), n.mains().size(), n.valves().size(), n.stations().size(), n.services().size(), n.crs().name(),
                 errors == 0 ? "" : "; " + Plural.of(errors, "data error")
@@ -346,6 +346,7 @@ public final class MainWindow extends JFrame {
 
         @Override public void planEvaluated(PlanEvaluation.Result r) {
             status.planEvaluated(r);
+            findings.showPlan(r);
         }
     }
 

@@ -28,8 +28,6 @@ import org.jfree.chart.plot.CategoryMarker;
 import org.jfree.chart.plot.CategoryPlot;
 import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
-import org.shutline.model.Words;
 import org.shutline.plan.Plan;
 import org.shutline.plan.PlanException;
 import org.shutline.plan.StepAction;
@@ -56,8 +54,7 @@ final class PlanPanel extends JPanel {
     private final DefaultListModel<String> stepRows = new DefaultListModel<>();
     private final JList<String> steps = new JList<>(stepRows);
     private final JLabel summary = new JLabel(" ");
-    private final DefaultListModel<String> hazardRows = new DefaultListModel<>();
-    private final JList<String> hazards = new JList<>(hazardRows);
+    private final FindingTable hazards;
     private final JTextArea details = new JTextArea(6, 40);
     private final ChartPanel chart = new ChartPanel(null);
     private PlanDraft draft;
@@ -72,6 +69,9 @@ final class PlanPanel extends JPanel {
     PlanPanel(WindowContext window, Runnable save) {
         super(new BorderLayout());
         this.window = window;
+        hazards = new FindingTable(h -> {
+            if (h.hasLocation()) window.zoomToPoint(h.x(), h.y(), h.code() + ": " + h.message());
+        });
         steps.setName("planSteps");
         summary.setName("planSummary");
         hazards.setName("planHazards");
@@ -261,7 +261,7 @@ final class PlanPanel extends JPanel {
 
     private void showStep(int i) {
         PlanEvaluation.Result r = result();
-        hazardRows.clear();
+        hazards.show(List.of());
         if (r == null || i < 0 || i >= r.steps().size()) {
             summary.setText(" ");
             details.setText("");
@@ -271,11 +271,9 @@ final class PlanPanel extends JPanel {
         PlanEvaluation.StepResult s = r.steps().get(i);
         summary.setText(" Step " + s.step().number() + ": " + Plural.of(s.servicesOff(), "service") + " off, " + Plural.of(s.metersOff(), "meter")
                 + " off, " + Plural.of(s.criticalOff().size(), "critical customer") + " off");
-        for (Hazard h : s.hazards()) hazardRows.addElement(Words.word(h.severity()).toUpperCase(Locale.ROOT) + " " + h.code() + ": " + h.message());
-        for (Hazard h : s.continuing()) hazardRows.addElement("(continuing) " + Words.word(h.severity()) + " " + h.code());
+        hazards.show(s.hazards(), s.continuing());
         StringBuilder d = new StringBuilder(s.step().describe()).append('\n');
         if (s.step().note() != null) d.append("note: ").append(s.step().note()).append('\n');
-        for (Hazard h : s.hazards()) d.append("action for ").append(h.code()).append(": ").append(h.action()).append('\n');
         for (PlanEvaluation.CriticalOff c : s.criticalOff()) {
             d.append("critical customer off: ").append(c.serviceId()).append(' ').append(c.kind())
                     .append(c.address() == null ? "" : ", " + c.address()).append('\n');

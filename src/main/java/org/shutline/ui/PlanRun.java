@@ -4,7 +4,7 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.app.AnalysisSettings;
 import org.shutline.app.PlanStudy;
 import org.shutline.app.Workspace;
@@ -59,8 +59,8 @@ public final class PlanRun {
             valves.add(ValveToOperate.of(++order, id, valve.geometry().getX(), valve.geometry().getY(), close));
         }
         List<HazardMark> marks = new ArrayList<>();
-        for (Hazard h : s.hazards()) if (!Double.isNaN(h.x())) marks.add(HazardMark.of(h.x(), h.y(), h.severity(), h.code()));
-        for (Hazard h : s.continuing()) {
+        for (Finding h : s.hazards()) if (!Double.isNaN(h.x())) marks.add(HazardMark.of(h.x(), h.y(), h.severity(), h.code()));
+        for (Finding h : s.continuing()) {
             if (!Double.isNaN(h.x()) && h.severity() == org.shutline.model.Severity.CRITICAL) {
                 marks.add(HazardMark.of(h.x(), h.y(), h.severity(), h.code()));
             }

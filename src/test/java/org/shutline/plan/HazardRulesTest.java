@@ -6,7 +6,7 @@ import java.time.LocalDate;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.shutline.analysis.PlanEvaluation;
-import org.shutline.analysis.hazard.Hazard;
+import org.shutline.model.Finding;
 import org.shutline.analysis.hazard.HazardCheck;
 import org.shutline.analysis.hazard.HazardChecks;
 import org.shutline.analysis.hazard.StepContext;
@@ -39,7 +39,7 @@ class HazardRulesTest {
                 12.0, Progress.NONE);
     }
 
-    static List<Hazard> at(PlanEvaluation.Result r, int step, String code) {
+    static List<Finding> at(PlanEvaluation.Result r, int step, String code) {
         return r.steps().get(step - 1).hazards().stream().filter(h -> h.code().equals(code)).toList();
     }
 

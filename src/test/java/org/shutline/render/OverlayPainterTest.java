@@ -1,5 +1,6 @@
 package org.shutline.render;
 
+import org.shutline.model.Finding;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.shutline.render.RenderFixtures.count;
 import static org.shutline.render.RenderFixtures.countOther;

@@ -111,8 +111,11 @@ class MainWindowDisplayTest {
         }
         assertThat(attached).isPositive();
         assertThat(summary).contains("Step 3: " + attached + " services off, " + meters + " meters off, 1 critical customer off");
-        List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
-        assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL tap-on-dead-main") && h.contains("T-S1-W"));
+        List<String> hazards = onEdt(() -> ((FindingTable) find(win, "planHazards")).rowTexts());
+        assertThat(hazards).anyMatch(h -> h.startsWith("critical | tap-on-dead-main") && h.contains("T-S1-W"));
+        // the window's one list of findings holds the plan's hazards beside the network's data findings
+        assertThat(onEdt(() -> ((FindingTable) find(win, "findingsTable")).rowTexts()))
+                .anyMatch(h -> h.startsWith("critical | tap-on-dead-main | 3 |") && h.contains("T-S1-W"));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
         assertThat(onEdt(() -> win.map().overlays().hazards())).anyMatch(h -> h.text().equals("tap-on-dead-main"));
         // next step with the keyboard shortcut's action: back to step 2, nothing off
@@ -423,8 +426,8 @@ class MainWindowDisplayTest {
                     .filter(h -> h.severity() == org.shutline.model.Severity.CRITICAL).findFirst().orElseThrow().features().get(0));
             return null;
         });
-        List<String> hazards = onEdt(() -> items(((JList<?>) find(win, "planHazards")).getModel()));
-        assertThat(hazards).anyMatch(h -> h.startsWith("CRITICAL "));
+        List<String> hazards = onEdt(() -> ((FindingTable) find(win, "planHazards")).rowTexts());
+        assertThat(hazards).anyMatch(h -> h.startsWith("critical | "));
         assertThat(onEdt(() -> win.cautionText())).startsWith("CRITICAL hazards in this plan.");
         // the File menu's export of the selected step writes the field package with the export command's code
         Path out = java.nio.file.Files.createTempDirectory("shutline-window-export");
@@ -457,7 +460,7 @@ class MainWindowDisplayTest {
         // the data errors of the network read are counted on the check tab (the same rule as every command)
         long errors = win.workspace().findings().stream().filter(f -> f.severity().compareTo(org.shutline.model.Severity.ERROR) >= 0).count();
         String title = onEdt(() -> win.tabs().getTitleAt(0));
-        assertThat(title).isEqualTo(errors == 0 ? "Network check" : "Network check (" + org.shutline.model.Plural.of(errors, "error") + ")");
+        assertThat(title).isEqualTo(errors == 0 ? "Findings" : "Findings (" + org.shutline.model.Plural.of(errors, "data error") + ")");
         javax.swing.JTextArea text = (javax.swing.JTextArea) onEdt(() -> find(win, "incidentText"));
         onEdt(() -> {
             win.tabs().setSelectedComponent(win.incidentPanel());

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.model.Service;
@@ -14,14 +15,14 @@ public final class CriticalCustomerOffCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         List<Service> svc = ctx.network().services();
         for (int i = 0; i < svc.size(); i++) {
             Service s = svc.get(i);
             if (!s.isCritical() || !ctx.baseTrace().isFed(i) || ctx.afterTrace().isFed(i)) continue;
             String kind = s.critical() == null || s.critical().isBlank() ? "critical customer" : s.critical();
-            out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(s.id()), s.geometry().getX(), s.geometry().getY(),
+            out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(s.id()), s.geometry().getX(), s.geometry().getY(),
                     "At " + ctx.stepLabel() + ", " + kind + " " + s.id() + (s.address() == null ? "" : " at " + s.address())
                             + " is off gas (" + s.meters() + " meter" + (s.meters() == 1 ? "" : "s") + ").",
                     "Notify the customer before the step and arrange temporary supply or timing; relight it first when gas returns."));

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -23,23 +24,23 @@ public final class DistrictFeedCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
+    public List<Finding> check(StepContext ctx) {
         Map<String, List<Integer>> districts = new LinkedHashMap<>();
         List<Station> sts = ctx.network().stations();
         for (int i = 0; i < sts.size(); i++) districts.computeIfAbsent(sts.get(i).outSys(), k -> new ArrayList<>()).add(i);
-        List<Hazard> out = new ArrayList<>();
+        List<Finding> out = new ArrayList<>();
         for (Map.Entry<String, List<Integer>> d : districts.entrySet()) {
             List<String> baseFeeds = feeding(ctx.base(), ctx.baseTrace(), d.getValue(), sts);
             List<String> nowFeeds = feeding(ctx.after(), ctx.afterTrace(), d.getValue(), sts);
             Station first = sts.get(d.getValue().get(0));
             if (nowFeeds.isEmpty() && !baseFeeds.isEmpty()) {
-                out.add(new Hazard(code(), Severity.CRITICAL, ctx.stepNumber(), withDistrict(d.getKey(), baseFeeds),
+                out.add(Finding.hazard(code(), Severity.CRITICAL, ctx.stepNumber(), withDistrict(d.getKey(), baseFeeds),
                         first.geometry().getX(), first.geometry().getY(),
                         "At " + ctx.stepLabel() + ", district " + d.getKey() + " has no feeding station (normally fed by "
                                 + String.join(", ", baseFeeds) + "): the whole district goes off gas and must be purged and relit.",
                         "Keep at least one station feeding " + d.getKey() + " through this step, or plan the district shut-down, purge and relight."));
             } else if (nowFeeds.size() == 1 && baseFeeds.size() >= 2) {
-                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), withDistrict(d.getKey(), nowFeeds),
+                out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), withDistrict(d.getKey(), nowFeeds),
                         first.geometry().getX(), first.geometry().getY(),
                         "At " + ctx.stepLabel() + ", district " + d.getKey() + " is fed by one station only (" + nowFeeds.get(0)
                                 + "; normally " + String.join(", ", baseFeeds) + "): a failure there takes the district off gas.",

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.List;
 
 /**
@@ -14,7 +15,7 @@ public interface HazardCheck {
     /** One line saying what the rule looks for. */
     String description();
 
-    List<Hazard> check(StepContext ctx);
+    List<Finding> check(StepContext ctx);
 
     /**
      * True when a qualified person attending a station (able to shut it down, watching its

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.analysis.OverpressureLimit;
@@ -33,8 +34,8 @@ public final class MoveTapCheck implements HazardCheck {
     @Override public boolean mitigatedByAttendance() { return true; }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         if (ctx.step() == null || !(ctx.step().step().action() instanceof StepAction.MoveTap m)) return out;
         Network net = ctx.network();
         NetworkState s = ctx.before();
@@ -65,7 +66,7 @@ public final class MoveTapCheck implements HazardCheck {
         String action = "Staff station " + station.id() + " with a qualified person able to shut it down and watching its outlet pressure "
                 + "while the line is moved (an attend step), or take the station out of service or onto a manually controlled bypass "
                 + "for the move (49 CFR 192.195-201).";
-        out.add(new Hazard(code(), sev, ctx.stepNumber(), List.of(station.id(), tap.id()), tap.geometry().getX(), tap.geometry().getY(),
+        out.add(Finding.hazard(code(), sev, ctx.stepNumber(), List.of(station.id(), tap.id()), tap.geometry().getX(), tap.geometry().getY(),
                 msg, action));
         return out;
     }

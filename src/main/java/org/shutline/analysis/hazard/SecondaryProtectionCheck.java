@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.model.Severity;
@@ -18,13 +19,13 @@ public final class SecondaryProtectionCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         for (int i = 0; i < ctx.network().stations().size(); i++) {
             Station st = ctx.network().stations().get(i);
             if (!ctx.after().stationInService(i)) continue;
             if (st.monitorKpa() == null && st.reliefKpa() != null && !st.hasFullRelief()) {
-                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
+                out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
                         "Station " + st.id() + TapOnDeadMainCheck.label(st) + " has no monitor and a relief of "
                                 + (st.reliefFull() == null ? "unrecorded" : "token") + " capacity (relief_full not yes): "
                                 + "it may not limit a failed-open regulator's flow into " + st.outSys() + ".",
@@ -33,7 +34,7 @@ public final class SecondaryProtectionCheck implements HazardCheck {
                 continue;
             }
             if (st.hasSecondaryProtection()) continue;
-            out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
+            out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(st.id()), st.geometry().getX(), st.geometry().getY(),
                     "Station " + st.id() + TapOnDeadMainCheck.label(st) + " has no monitor regulator or relief device recorded: "
                             + "a regulator failure would pass inlet pressure into " + st.outSys() + ".",
                     "Confirm the station's overpressure protection in the field; until then staff it during work that affects its sensing."));

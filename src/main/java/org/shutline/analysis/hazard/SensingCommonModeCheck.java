@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.List;
 import org.shutline.model.Network;
@@ -25,11 +26,11 @@ public final class SensingCommonModeCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
+    public List<Finding> check(StepContext ctx) {
         NetworkState s = ctx.after();
         Network net = ctx.network();
         ValveSegments segs = null;
-        List<Hazard> out = new ArrayList<>();
+        List<Finding> out = new ArrayList<>();
         for (Station st : net.stations()) {
             List<Integer> taps = ctx.tapsOf(st.id());
             String found = null;
@@ -64,7 +65,7 @@ public final class SensingCommonModeCheck implements HazardCheck {
             }
             if (found != null) {
                 SenseTap first = net.taps().get(taps.get(0));
-                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), ids, first.geometry().getX(), first.geometry().getY(),
+                out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), ids, first.geometry().getX(), first.geometry().getY(),
                         "Station " + st.id() + TapOnDeadMainCheck.label(st) + ": " + found
                                 + " at " + ctx.stepLabel() + "; a single valve closure or cut there defeats both the worker and the monitor.",
                         "Give the monitor its own sensing point on another valve segment of " + st.outSys()

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -39,8 +40,8 @@ public final class SensingLineWorkCheck implements HazardCheck {
     @Override public boolean mitigatedByAttendance() { return true; }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         if (ctx.step() == null || ctx.step().workPoints().isEmpty()) return out;
         Network net = ctx.network();
         NetworkState s = ctx.before();
@@ -60,7 +61,7 @@ public final class SensingLineWorkCheck implements HazardCheck {
                     if (assumed) line = GF.createLineString(new Coordinate[] {station.geometry().getCoordinate(), now});
                     double d = line.distance(p);
                     if (d > limit) continue;
-                    out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(station.id(), tap.id(), wp.mainId()),
+                    out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(station.id(), tap.id(), wp.mainId()),
                             wp.x(), wp.y(),
                             String.format(Locale.ROOT, "At %s, the %s on main %s is %.1f %s from the control line of station %s%s "
                                     + "(tap %s; path %s): the work may damage it, and the station would then sense no outlet pressure and open wide.",

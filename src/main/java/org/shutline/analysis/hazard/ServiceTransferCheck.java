@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import org.shutline.model.Plural;
 import java.util.ArrayList;
 import java.util.List;
@@ -24,8 +25,8 @@ public final class ServiceTransferCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         if (ctx.step() == null || !(ctx.step().step().action() instanceof StepAction.TransferServices t)) return out;
         FeedTrace.Result before = ctx.beforeTrace(), after = ctx.afterTrace();
         List<Service> svc = ctx.network().services();
@@ -47,7 +48,7 @@ public final class ServiceTransferCheck implements HazardCheck {
             }
         }
         if (interrupted == 0) return out;
-        out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), ids, x, y,
+        out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), ids, x, y,
                 "At " + ctx.stepLabel() + ", " + Plural.of(interrupted, "service") + " (" + Plural.of(meters, "meter") + ") moved from " + t.from() + " to " + t.to()
                         + (interrupted == 1 ? " is" : " are") + " interrupted; " + Plural.of(relights, "meter") + (relights == 1 ? " needs" : " need") + " a relight at this step"
                         + (stayOff == 0 ? "." : "; " + Plural.of(stayOff, "service") + (stayOff == 1 ? " stays" : " stay") + " off gas after it (" + t.to() + " not live)."),

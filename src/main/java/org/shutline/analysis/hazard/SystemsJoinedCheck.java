@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -22,7 +23,7 @@ public final class SystemsJoinedCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
+    public List<Finding> check(StepContext ctx) {
         NetworkState s = ctx.after();
         int n = s.nodeCount();
         int m = s.edgeCount();
@@ -43,7 +44,7 @@ public final class SystemsJoinedCheck implements HazardCheck {
                 conflicts.putIfAbsent(a + ":" + b, new int[] {a, b, edgeOf[r], e});
             }
         }
-        List<Hazard> out = new ArrayList<>();
+        List<Finding> out = new ArrayList<>();
         for (int[] c : conflicts.values()) {
             String sa = s.graph().systemId(c[0]), sb = s.graph().systemId(c[1]);
             List<String> ids = new ArrayList<>();
@@ -51,7 +52,7 @@ public final class SystemsJoinedCheck implements HazardCheck {
             ids.add(s.mainId(s.edgeFeature(c[2])));
             ids.add(s.mainId(s.edgeFeature(c[3])));
             double x = s.nodeX(s.edgeFrom(c[3])), y = s.nodeY(s.edgeFrom(c[3]));
-            out.add(new Hazard(code(), Severity.CRITICAL, ctx.stepNumber(), ids.stream().distinct().toList(), x, y,
+            out.add(Finding.hazard(code(), Severity.CRITICAL, ctx.stepNumber(), ids.stream().distinct().toList(), x, y,
                     "At " + ctx.stepLabel() + ", pressure systems " + Pressures.describe(ctx.network(), sa, ctx.settings().pressureUnit())
                             + " and " + Pressures.describe(ctx.network(), sb, ctx.settings().pressureUnit())
                             + " are joined without a regulator station: the lower-pressure system will be over-pressured.",

@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import org.shutline.model.Plural;
 import java.util.ArrayList;
 import java.util.List;
@@ -30,11 +31,11 @@ public final class TapOnDeadMainCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
+    public List<Finding> check(StepContext ctx) {
         NetworkState s = ctx.after();
         Network net = ctx.network();
         FeedTrace.Result tr = ctx.afterTrace();
-        List<Hazard> out = new ArrayList<>();
+        List<Finding> out = new ArrayList<>();
         for (int st = 0; st < s.stationCount(); st++) {
             int e = s.stationEdge(st);
             if (!tr.stationPasses(s, st)) continue;
@@ -59,7 +60,7 @@ public final class TapOnDeadMainCheck implements HazardCheck {
         return out;
     }
 
-    private Hazard hazard(StepContext ctx, Station station, SenseTap tap, int st, String why, FeedTrace.Result tr) {
+    private Finding hazard(StepContext ctx, Station station, SenseTap tap, int st, String why, FeedTrace.Result tr) {
         int atRisk = tr.servicesFedThrough(st).cardinality();
         String msg = "At " + ctx.stepLabel() + ", station " + station.id() + label(station) + " sensing tap " + tap.id()
                 + " (" + tap.device().name().toLowerCase() + ") " + why + ". The station will sense no outlet pressure, open wide"
@@ -69,7 +70,7 @@ public final class TapOnDeadMainCheck implements HazardCheck {
         String action = "Move sensing tap " + tap.id() + " to a live main of " + station.outSys() + " connected to the station outlet before "
                 + ctx.stepLabel() + "; otherwise staff station " + station.id()
                 + " with a qualified person able to shut it down, and watch its outlet pressure throughout " + ctx.stepLabel() + ".";
-        return new Hazard(code(), Severity.CRITICAL, ctx.stepNumber(), List.of(station.id(), tap.id()),
+        return Finding.hazard(code(), Severity.CRITICAL, ctx.stepNumber(), List.of(station.id(), tap.id()),
                 tap.geometry().getX(), tap.geometry().getY(), msg, action);
     }
 

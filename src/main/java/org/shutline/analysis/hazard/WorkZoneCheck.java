@@ -1,5 +1,6 @@
 package org.shutline.analysis.hazard;
 
+import org.shutline.model.Finding;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.LinkedHashSet;
@@ -28,15 +29,15 @@ public final class WorkZoneCheck implements HazardCheck {
     }
 
     @Override
-    public List<Hazard> check(StepContext ctx) {
-        List<Hazard> out = new ArrayList<>();
+    public List<Finding> check(StepContext ctx) {
+        List<Finding> out = new ArrayList<>();
         if (ctx.step() == null) return out;
         NetworkState s = ctx.before();
         FeedTrace.Result tr = ctx.beforeTrace();
         for (WorkPoint wp : ctx.step().workPoints()) {
             if (tr.isEdgeLive(wp.edge())) {
                 boolean cut = wp.kind().equals("cut");
-                out.add(new Hazard(code(), cut ? Severity.CRITICAL : Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId()), wp.x(), wp.y(),
+                out.add(Finding.hazard(code(), cut ? Severity.CRITICAL : Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId()), wp.x(), wp.y(),
                         "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is still live: "
                                 + (cut ? "cutting it releases gas." : "tying in there means working on a live main."),
                         cut ? "Close the valves that isolate this point first (see the isolation of main " + wp.mainId() + ")."
@@ -48,7 +49,7 @@ public final class WorkZoneCheck implements HazardCheck {
         return out;
     }
 
-    private void relied(StepContext ctx, NetworkState s, FeedTrace.Result tr, WorkPoint wp, List<Hazard> out) {
+    private void relied(StepContext ctx, NetworkState s, FeedTrace.Result tr, WorkPoint wp, List<Finding> out) {
         BitSet seen = new BitSet(s.nodeCount());
         int[] stack = new int[64];
         int top = 0;
@@ -80,13 +81,13 @@ public final class WorkZoneCheck implements HazardCheck {
             String id = s.valveId(v);
             var doubt = ctx.doubt(s, v);
             if (doubt.inoperable()) {
-                out.add(new Hazard(code(), Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
+                out.add(Finding.hazard(code(), Severity.ERROR, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
                         "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
                                 + ", which is recorded inoperable and may not hold.",
                         "Do not rely on " + id + ": close the next valve beyond it, or repair it before the step."));
             } else if (doubt.doubtful()) {
                 String why = doubt.why();
-                out.add(new Hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
+                out.add(Finding.hazard(code(), Severity.WARNING, ctx.stepNumber(), List.of(wp.mainId(), id), wp.x(), wp.y(),
                         "At " + ctx.stepLabel() + ", the " + wp.kind() + " point on main " + wp.mainId() + " is kept dead by valve " + id
                                 + ", which is " + why + ".",
                         "Operate and check " + id + " before the step, staff it while the work is open, and have its fallback valves ready."));
