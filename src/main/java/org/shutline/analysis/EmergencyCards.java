@@ -57,7 +57,7 @@ public final class EmergencyCards {
 
     private EmergencyCards() {}
 
-    public static List<Card> build(PlanStates ps, Isolation.Options options, ResponseSettings settings, double pitRadiusM) {
+    public static List<Card> build(PlanStates ps, ValveDoubt.Settings options, ResponseSettings settings, double pitRadiusM) {
         List<Card> cards = new ArrayList<>();
         List<Phase> phases = ps.plan().phases();
         for (int p = 0; p < phases.size(); p++) {

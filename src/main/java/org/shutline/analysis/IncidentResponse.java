@@ -49,7 +49,7 @@ public final class IncidentResponse {
 
     private IncidentResponse() {}
 
-    public static Result leak(ValveSegments segs, Isolation.Options options, Zone zone, ResponseSettings settings) {
+    public static Result leak(ValveSegments segs, ValveDoubt.Settings options, Zone zone, ResponseSettings settings) {
         Isolation iso = new Isolation(segs, options);
         Isolation.Result r = iso.isolate(zone);
         BitSet before = iso.fedSegments();

@@ -1,12 +1,10 @@
 package org.shutline.analysis;
 
-import java.time.LocalDate;
 import java.time.Period;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Objects;
 import java.util.Optional;
 import org.shutline.model.Operability;
 import org.shutline.model.Service;
@@ -67,28 +65,6 @@ import org.shutline.trace.ValveSegments;
 public final class Isolation {
     /** Inspection interval of 49 CFR 192.747: at most 15 months. */
     public static final Period DEFAULT_INSPECTION_INTERVAL = ValveDoubt.INTERVAL;
-
-    /** Settings: a thin carrier of the {@link ValveDoubt} settings (as-of date and inspection interval). */
-    public record Options(LocalDate asOf, Period inspectionInterval) {
-        public Options {
-            Objects.requireNonNull(asOf, "asOf");
-            Objects.requireNonNull(inspectionInterval, "inspectionInterval");
-        }
-
-        /** The 15-month interval, checks measured at {@code date}. */
-        public static Options defaults(LocalDate date) {
-            return new Options(date, DEFAULT_INSPECTION_INTERVAL);
-        }
-
-        public static Options of(ValveDoubt.Settings s) {
-            return new Options(s.asOf(), s.interval());
-        }
-
-        /** The settings of the doubtful-valve rule. */
-        public ValveDoubt.Settings doubt() {
-            return new ValveDoubt.Settings(asOf, inspectionInterval);
-        }
-    }
 
     /** One valve to close, in operating order (1 = first). */
     public record ValveStep(int order, String valveId, int valve, Operability operable, boolean overdue, int hops) {}
@@ -185,7 +161,7 @@ public final class Isolation {
     private final ValveSegments segs;
     private final SegmentGraph sg;
     private final NetworkState state;
-    private final Options options;
+    private final ValveDoubt.Settings options;
     private final ValveDoubt.Settings doubt;
     private final BitSet before;
     private final int[] hops;
@@ -196,12 +172,12 @@ public final class Isolation {
     /** Built on the first point or polygon zone, then reused. */
     private EdgeIndex index;
 
-    public Isolation(ValveSegments segments, Options options) {
+    public Isolation(ValveSegments segments, ValveDoubt.Settings options) {
         this.segs = segments;
         this.sg = segments.graph();
         this.state = segments.state();
         this.options = options;
-        this.doubt = options.doubt();
+        this.doubt = options;
         this.before = sg.reachFromSources(null, null);
         this.hops = sg.hopsFromSources();
         List<Service> all = state.network().services();
@@ -211,7 +187,7 @@ public final class Isolation {
     }
 
     /** Isolation on the valve segments of a state (built here, O(nodes + edges)). */
-    public static Isolation of(NetworkState state, Options options) {
+    public static Isolation of(NetworkState state, ValveDoubt.Settings options) {
         return new Isolation(ValveSegments.build(state), options);
     }
 
@@ -519,5 +495,5 @@ public final class Isolation {
     /** Segments fed before any closing (the instance's own set: not to be changed). */
     BitSet before() { return before; }
 
-    Options options() { return options; }
+    ValveDoubt.Settings options() { return options; }
 }

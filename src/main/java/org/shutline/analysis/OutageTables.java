@@ -140,7 +140,7 @@ public final class OutageTables {
         }
         if (fed.isEmpty()) return;
         // only the counts are read: they do not depend on the inspection date
-        Isolation iso = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
+        Isolation iso = new Isolation(segs, ValveDoubt.Settings.defaults(java.time.LocalDate.of(2000, 1, 1)));
         java.util.Map<Integer, java.util.BitSet> unitSegs = new java.util.HashMap<>();
         for (int s = 0; s < unitOf.length; s++) if (fed.get(unitOf[s])) unitSegs.computeIfAbsent(unitOf[s], k -> new java.util.BitSet()).set(s);
         for (var e : unitSegs.entrySet()) {

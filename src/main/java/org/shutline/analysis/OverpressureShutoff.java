@@ -75,7 +75,7 @@ public final class OverpressureShutoff {
 
     private OverpressureShutoff() {}
 
-    public static Result of(ValveSegments segs, Isolation.Options options, String systemId, ResponseSettings settings) {
+    public static Result of(ValveSegments segs, ValveDoubt.Settings options, String systemId, ResponseSettings settings) {
         NetworkState s = segs.state();
         SegmentGraph sg = segs.graph();
         int sys = s.graph().systemIndex(systemId);
@@ -204,7 +204,7 @@ public final class OverpressureShutoff {
      * The station's verified stop valves in this state (see {@link StationStop}); empty
      * when it passes no gas already or valves alone cannot stop it.
      */
-    static List<String> inletValves(ValveSegments segs, Isolation.Options options, int station) {
+    static List<String> inletValves(ValveSegments segs, ValveDoubt.Settings options, int station) {
         StationStop.Result r = new Isolation(segs, options).stationStop(station);
         return r.stoppable() ? r.valves() : List.of();
     }

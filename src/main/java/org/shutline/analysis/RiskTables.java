@@ -157,7 +157,7 @@ public final class RiskTables {
         List<StationRow> rows = new ArrayList<>();
         Network net = s.network();
         // only the stop valves are read: they do not depend on the inspection date
-        Isolation iso = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
+        Isolation iso = new Isolation(segs, ValveDoubt.Settings.defaults(java.time.LocalDate.of(2000, 1, 1)));
         for (int st = 0; st < s.stationCount(); st++) {
             Station station = net.stations().get(st);
             int x = 1 + units + st;

@@ -50,7 +50,7 @@ final class Suggestions {
         List<Isolation.Fallback> fallbacks = new ArrayList<>();
         if (!zone.isEmpty()) {
             BitSet offStep = segs.servicesOf(zone);
-            Isolation iso = new Isolation(segs, Isolation.Options.of(settings.doubt()));
+            Isolation iso = new Isolation(segs, settings.doubt());
             for (int v : valves) {
                 int l = sg.valveLink(v);
                 if (l < 0) continue;

@@ -139,7 +139,7 @@ public final class ValveOrder {
      * @param iso the isolation that made {@code r} (used again for fallbacks that valves alone cannot isolate)
      * @param options the same options (the inspection rule for station inlet valves)
      */
-    public static Result of(ValveSegments segs, Isolation iso, Isolation.Options options, Isolation.Result r, ResponseSettings settings) {
+    public static Result of(ValveSegments segs, Isolation iso, ValveDoubt.Settings options, Isolation.Result r, ResponseSettings settings) {
         NetworkState s = segs.state();
         Map<String, Integer> index = new HashMap<>();
         for (int v = 0; v < s.valveCount(); v++) index.putIfAbsent(s.valveId(v), v);
@@ -149,7 +149,7 @@ public final class ValveOrder {
         Set<String> listed = new HashSet<>();
         for (Isolation.ValveStep v : r.valves()) {
             double[] xy = IncidentResponse.valveXY(s, v.valve());
-            boolean doubtful = ValveDoubt.of(s, v.valve(), options.doubt()).doubtful();
+            boolean doubtful = ValveDoubt.of(s, v.valve(), options).doubtful();
             stops.add(new ValveRoute.Stop(v.valveId(), xy[0] * unit, xy[1] * unit, doubtful, v.hops()));
             steps.put(v.valveId(), v);
             listed.add(v.valveId());
@@ -159,7 +159,7 @@ public final class ValveOrder {
             Integer v = index.get(id);
             if (v == null || !listed.add(id)) continue;
             double[] xy = IncidentResponse.valveXY(s, v);
-            boolean doubtful = ValveDoubt.of(s, v, options.doubt()).doubtful();
+            boolean doubtful = ValveDoubt.of(s, v, options).doubtful();
             stops.add(new ValveRoute.Stop(id, xy[0] * unit, xy[1] * unit, doubtful, -1));
             inlets.add(id);
         }
@@ -184,7 +184,7 @@ public final class ValveOrder {
             } else {
                 List<String> stopsStations = new ArrayList<>();
                 for (StationStop.Result st : r.stationStops()) if (st.valves().contains(id)) stopsStations.add(st.stationId());
-                out.add(new Step(order, id, v, crew, s.valveOperability(v), ValveDoubt.of(s, v, options.doubt()).overdue(), stopOf.get(id).doubtful(), true,
+                out.add(new Step(order, id, v, crew, s.valveOperability(v), ValveDoubt.of(s, v, options).overdue(), stopOf.get(id).doubtful(), true,
                         xy[0], xy[1], fb, stopsStations));
             }
         }

@@ -7,7 +7,6 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.OverpressureLimit;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.ValveDoubt;
@@ -68,9 +67,9 @@ public record AnalysisSettings(ValveDoubt.Settings doubt, PressureUnit pressureU
         return doubt.interval();
     }
 
-    /** The settings of the isolation engine (the valve-doubt rule). */
-    public Isolation.Options isolation() {
-        return Isolation.Options.of(doubt);
+    /** The settings of the isolation engine: the valve-doubt rule. */
+    public ValveDoubt.Settings isolation() {
+        return doubt;
     }
 
     /** The settings of the plan checks; the pressure unit is this one, else {@code planUnit} (the plan's own). */

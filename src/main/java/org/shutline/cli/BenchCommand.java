@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.analysis.ValveDoubt;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
@@ -129,7 +130,7 @@ public final class BenchCommand implements Callable<Integer> {
         double full = best(1, () -> FeedTrace.run(state));
 
         ValveSegments segs = ValveSegments.build(state);
-        Isolation iso = new Isolation(segs, Isolation.Options.defaults(LocalDate.of(2026, 12, 1)));
+        Isolation iso = new Isolation(segs, ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1)));
         double[] isoTimes = isolations(topo, iso);
         double[] segTimes = segmentIsolations(segs.segmentCount(), iso);
 

@@ -1,5 +1,6 @@
 package org.shutline.cli;
 
+import org.shutline.analysis.ValveDoubt;
 import org.shutline.model.Plural;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -79,7 +80,7 @@ public final class CardsCommand implements Callable<Integer> {
         Workspace t = input.open(s);
         PlanStates ps = PlanApplier.apply(PlanReader.read(planFile), t.base(), planFile.getFileName().toString());
         ResponseSettings settings = s.response();
-        Isolation.Options options = s.isolation();
+        ValveDoubt.Settings options = s.isolation();
         List<EmergencyCards.Card> cards = EmergencyCards.build(ps, options, settings, pitRadius);
         org.shutline.analysis.InstructionCheck.verify(ps, cards, "cards " + planFile.getFileName());
         GridSheets grid = GridSheets.of(t.network().crs());

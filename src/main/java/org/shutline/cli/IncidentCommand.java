@@ -1,11 +1,11 @@
 package org.shutline.cli;
 
+import org.shutline.analysis.ValveDoubt;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.shutline.analysis.IncidentResponse;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.InstructionCheck;
 import org.shutline.analysis.OverpressureShutoff;
 import org.shutline.analysis.Placement;
@@ -92,7 +92,7 @@ public final class IncidentCommand implements Callable<Integer> {
             return NetworkInput.badInput(err, "incident: " + e.getMessage());
         }
         if (place == null) return 2;
-        Isolation.Options options = s.isolation();
+        ValveDoubt.Settings options = s.isolation();
         ObjectNode root = Json.object();
         StringBuilder sb = new StringBuilder();
         root.put("kind", kind.name());

@@ -127,7 +127,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
      *
      * @throws IllegalArgumentException when the plan has no such step
      */
-    public static ReportView ofStep(PlanEvaluation.Result r, int number, Isolation.Options options) {
+    public static ReportView ofStep(PlanEvaluation.Result r, int number, ValveDoubt.Settings options) {
         List<StepState> states = r.states().steps();
         for (int i = 0; i < states.size(); i++) {
             StepState st = states.get(i);
@@ -145,7 +145,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
         throw new IllegalArgumentException("the plan has no step " + number + " (it has " + states.size() + ")");
     }
 
-    private static List<OperatedValve> stepValves(StepState st, PlanEvaluation.StepResult sr, Isolation.Options opt) {
+    private static List<OperatedValve> stepValves(StepState st, PlanEvaluation.StepResult sr, ValveDoubt.Settings opt) {
         List<String> ids;
         boolean close;
         Map<String, List<String>> fallbacks = new HashMap<>();
@@ -173,7 +173,7 @@ public record ReportView(Kind kind, String subject, String phase, int step, Netw
             if (v == null) continue;
             double[] xy = valvePoint(s, v);
             out.add(new OperatedValve(out.size() + 1, id, xy[0], xy[1], close, s.valveKind(v), s.valveOperability(v),
-                    s.valveChecked(v), ValveDoubt.of(s, v, opt.doubt()).overdue(), fallbacks.getOrDefault(id, List.of()), 0,
+                    s.valveChecked(v), ValveDoubt.of(s, v, opt).overdue(), fallbacks.getOrDefault(id, List.of()), 0,
                     texts.getOrDefault(id, "")));
         }
         return out;

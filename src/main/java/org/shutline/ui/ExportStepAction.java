@@ -1,10 +1,10 @@
 package org.shutline.ui;
 
+import org.shutline.analysis.ValveDoubt;
 import org.shutline.app.Workspace;
 import java.awt.event.ActionEvent;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.report.ReportBuilder;
 import org.shutline.report.ReportView;
@@ -46,7 +46,7 @@ final class ExportStepAction extends WindowAction {
         Path planFile = plan.file();
         int step = r.steps().get(index).step().number();
         ctx.run(new Task<>("export step " + step, p -> {
-            ReportView view = ReportView.ofStep(r, step, Isolation.Options.defaults(LocalDate.now()));
+            ReportView view = ReportView.ofStep(r, step, ValveDoubt.Settings.defaults(LocalDate.now()));
             ReportBuilder b = ReportBuilder.of(view, netFile, ReportBuilder.Options.defaults());
             if (planFile != null) b = b.withPlan(r, planFile);
             return b.write(dir, p);

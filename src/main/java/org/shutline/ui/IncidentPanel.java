@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.analysis.ValveDoubt;
 import org.shutline.app.Workspace;
 import org.shutline.model.Plural;
 import java.awt.BorderLayout;
@@ -96,7 +97,7 @@ final class IncidentPanel extends JPanel {
         ResponseSettings settings = settings();
         double maxM = ((Number) maxDistance.getValue()).doubleValue();
         text.setText(String.format(Locale.ROOT, "Isolating at %.1f, %.1f ...", x, y));
-        Isolation.Options opt = Isolation.Options.defaults(LocalDate.now());
+        ValveDoubt.Settings opt = ValveDoubt.Settings.defaults(LocalDate.now());
         window.run(new Task<>("isolate", p -> {
             p.begin("isolate", 0);
             return locate(ws, x, y, maxM, opt, settings);
@@ -115,11 +116,11 @@ final class IncidentPanel extends JPanel {
      * on, re-traced before it is returned (none when refused).
      */
     Outcome locate(Workspace ws, double x, double y, double maxM) {
-        return locate(ws, x, y, maxM, Isolation.Options.defaults(LocalDate.now()), ResponseSettings.DEFAULT);
+        return locate(ws, x, y, maxM, ValveDoubt.Settings.defaults(LocalDate.now()), ResponseSettings.DEFAULT);
     }
 
     /** As {@link #locate(Workspace, double, double, double)} with the given options and settings. */
-    Outcome locate(Workspace ws, double x, double y, double maxM, Isolation.Options opt, ResponseSettings settings) {
+    Outcome locate(Workspace ws, double x, double y, double maxM, ValveDoubt.Settings opt, ResponseSettings settings) {
         Placement.Result pr = placementFor(ws).point(x, y, null, maxM);
         if (!(pr instanceof Placement.Placed pl)) return new Outcome(pr, null, null);
         IncidentResponse.Result r = IncidentResponse.leak(ws.segments(), opt, pl.zone(), settings);

@@ -27,7 +27,7 @@ public final class BruteForceOutages {
         this.segs = segs;
         this.sg = segs.graph();
         this.before = sg.reachFromSources(null, null);
-        this.stops = new Isolation(segs, Isolation.Options.defaults(java.time.LocalDate.of(2000, 1, 1)));
+        this.stops = new Isolation(segs, ValveDoubt.Settings.defaults(java.time.LocalDate.of(2000, 1, 1)));
     }
 
     public long servicesOffWhenIsolated(int segment) {

@@ -11,7 +11,7 @@ import org.shutline.trace.ValveSegments;
 
 /** Leak and damage response on hand-drawn networks, answers worked by hand. */
 class IncidentResponseTest {
-    static final Isolation.Options OPTIONS = IsolationTest.OPTIONS;
+    static final ValveDoubt.Settings OPTIONS = IsolationTest.OPTIONS;
     static final ResponseSettings ONE_CREW = ResponseSettings.DEFAULT.withCrews(1);
 
     /*

@@ -20,7 +20,7 @@ import org.shutline.trace.ValveSegments;
  * check itself must catch a tampered answer.
  */
 class InstructionCheckRandomTest {
-    static final Isolation.Options OPTIONS = IsolationTest.OPTIONS;
+    static final ValveDoubt.Settings OPTIONS = IsolationTest.OPTIONS;
 
     @Test
     void everyStopIsolationAndShutOffPassesTheReTraceOnRandomNetworks() {

@@ -22,7 +22,7 @@ import org.shutline.trace.ValveSegments;
  * isolation, fallbacks and alternative must pass {@link InstructionCheck}.
  */
 class InstructionCheckSampleTest {
-    static final Isolation.Options OPTIONS = Isolation.Options.defaults(SampleTown.AS_OF);
+    static final ValveDoubt.Settings OPTIONS = ValveDoubt.Settings.defaults(SampleTown.AS_OF);
     static ValveSegments segs;
 
     @BeforeAll

@@ -52,7 +52,7 @@ class IsolationFastPathTest {
         Random rnd = new Random(seed);
         for (int k = 0; k < 3 && st.valveCount() > 0; k++) st = st.withValveClosed(rnd.nextInt(st.valveCount()), rnd.nextBoolean());
         ValveSegments segs = ValveSegments.build(st);
-        Isolation iso = new Isolation(segs, Isolation.Options.defaults(LocalDate.of(2026, 12, 1)));
+        Isolation iso = new Isolation(segs, ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1)));
         int compared = 0;
         for (int seg = 0; seg < segs.segmentCount(); seg++) {
             BitSet zone = new BitSet();

@@ -16,7 +16,7 @@ import org.shutline.trace.ValveSegments;
 
 /** Properties of isolation on seeded random networks (seed in every failure message). */
 class IsolationPropertyTest {
-    static final Isolation.Options OPTIONS = Isolation.Options.defaults(LocalDate.of(2026, 12, 1));
+    static final ValveDoubt.Settings OPTIONS = ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1));
 
     static long[] seeds() {
         long[] s = new long[150];

@@ -14,7 +14,7 @@ import org.shutline.trace.FeedTrace;
 import org.shutline.trace.ValveSegments;
 
 class IsolationTest {
-    static final Isolation.Options OPTIONS = Isolation.Options.defaults(LocalDate.of(2026, 12, 1));
+    static final ValveDoubt.Settings OPTIONS = ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1));
 
     /*
      *   A--1--b--2--c        segments (by hand):
@@ -103,7 +103,7 @@ class IsolationTest {
         assertThat(f2.addedServices()).containsExactly("s2", "s4", "s5");
         assertThat(r.fallbacks().get(1).why()).startsWith("never checked");
 
-        Isolation early = new Isolation(ValveSegments.build(t.state()), Isolation.Options.defaults(LocalDate.of(2026, 3, 1)));
+        Isolation early = new Isolation(ValveSegments.build(t.state()), ValveDoubt.Settings.defaults(LocalDate.of(2026, 3, 1)));
         assertThat(early.isolate(Zone.point(120, 0)).fallbacks()).extracting(Isolation.Fallback::valveId)
                 .containsExactly("V4");
     }

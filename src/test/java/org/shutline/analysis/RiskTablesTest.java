@@ -20,7 +20,7 @@ import org.shutline.trace.ValveSegments;
 
 /** The all-cases tables: by hand on the ring, then against per-case isolation and brute force. */
 class RiskTablesTest {
-    static final Isolation.Options OPTIONS = Isolation.Options.defaults(LocalDate.of(2026, 12, 1));
+    static final ValveDoubt.Settings OPTIONS = ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1));
 
     /*
      * IsolationTest.RING (X0 source s1, X1 s2, X2 s3 clinic 3 m, X3 s4 4 m, X4 s5 5 m):

@@ -71,7 +71,7 @@ class SettingsFileTest {
         assertThat(r.rates()).isEqualTo(new ResponseRates(12, 1.5, 0.2, 3, 10));
         // the engine sees the same values
         assertThat(s.isolation().asOf()).isEqualTo(s.asOf());
-        assertThat(s.isolation().inspectionInterval()).isEqualTo(Period.ofMonths(12));
+        assertThat(s.isolation().interval()).isEqualTo(Period.ofMonths(12));
         StepContext.Settings step = s.stepSettings(PressureUnit.KPA);
         assertThat(step.pressureUnit()).isEqualTo(PressureUnit.PSI);
         assertThat(step.sensingLineM()).isEqualTo(25.0);

@@ -1,11 +1,11 @@
 package org.shutline.ui;
 
+import org.shutline.analysis.ValveDoubt;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.time.LocalDate;
 import org.junit.jupiter.api.Test;
 import org.shutline.analysis.IncidentResponse;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.ResponseSettings;
 import org.shutline.analysis.WorkPackages;
 import org.shutline.analysis.Zone;
@@ -24,7 +24,7 @@ class IncidentPanelTextTest {
         assertThat(s.crewsGiven()).as("the window's default is the command line's: crews computed").isFalse();
         // the window's own path: placement, response, packages and the re-trace, then the text
         IncidentPanel.Outcome o = new IncidentPanel(null).locate(ws, 512470, 4890150, 100,
-                Isolation.Options.defaults(LocalDate.of(2026, 12, 1)), s);
+                ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1)), s);
         WorkPackages.Result wp = o.packages();
         String text = IncidentPanel.describe(o.response(), wp, (org.shutline.analysis.Placement.Placed) o.placement(), s);
         assertThat(text).contains("Placed on main").containsPattern("1\\. V-015  crew 1 .*\\n +if it will not close \\(operability unknown\\): crew 1 then closes V-024, V-023, V-022, V-021, V-020")

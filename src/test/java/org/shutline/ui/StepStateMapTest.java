@@ -1,5 +1,6 @@
 package org.shutline.ui;
 
+import org.shutline.analysis.ValveDoubt;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.awt.geom.Point2D;
@@ -10,7 +11,6 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Envelope;
-import org.shutline.analysis.Isolation;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.app.Workspace;
 import org.shutline.model.Progress;
@@ -132,7 +132,7 @@ class StepStateMapTest {
     void thePrintedMapOfAStepDrawsTheBypass() {
         Envelope area = new Envelope(BX - 12, BX + 12, BY0 - 6, BY1 + 6);
         ReportBuilder.Options opts = ReportBuilder.Options.defaults().withMade(java.time.LocalDateTime.of(2026, 12, 1, 8, 0));
-        Isolation.Options iso = Isolation.Options.defaults(LocalDate.of(2026, 12, 1));
+        ValveDoubt.Settings iso = ValveDoubt.Settings.defaults(LocalDate.of(2026, 12, 1));
         int dpi = 150;
         double k = dpi / 72.0;
         int[] dark = new int[3];
