@@ -256,11 +256,11 @@ final class GeoPackageSource {
                         byte[] blob = r.getBytes(2);
                         RawLayer.Feature f;
                         if (blob == null) {
-                            f = new RawLayer.Feature(fid, null, null, Arrays.asList(vals));
+                            f = new RawLayer.Feature(fid, null, null, vals);
                         } else {
                             GpkgGeometry.Result g = geom.decode(blob);
                             f = new RawLayer.Feature(fid, g.geometry(), g.error() == null ? null
-                                    : "geometry (field " + geomColumn + ") not readable: " + g.error(), Arrays.asList(vals));
+                                    : "geometry (field " + geomColumn + ") not readable: " + g.error(), vals);
                         }
                         fs.add(f);
                     }
