@@ -27,8 +27,10 @@ import org.sqlite.SQLiteConfig;
  * Reads every feature table of a GeoPackage into {@link RawLayer}s, in the order
  * {@code gpkg_contents} lists them, with plain SQL over the SQLite driver.
  *
- * <p>The file is opened read-only ({@code mode=ro} URI and the driver's read-only flag):
- * nothing is written or created beside it. Metadata comes from the GeoPackage tables
+ * <p>The file is opened read-only ({@code mode=ro} URI and the driver's read-only flag),
+ * and immutable unless a write-ahead log lies beside it ({@link #open}): nothing is
+ * written or created beside it. A damaged file is "not a readable GeoPackage (file is
+ * truncated or corrupt: SQLite says ...)" ({@link #unreadable}). Metadata comes from the GeoPackage tables
  * ({@code gpkg_contents}, {@code gpkg_geometry_columns}, {@code gpkg_spatial_ref_sys},
  * OGC 12-128r18 sections 1.1.2, 1.1.3, 2.1.5); a database without them is "not a readable
  * GeoPackage". Per layer one prepared {@code SELECT pk, geom, fields...}; values by the
@@ -69,7 +71,7 @@ final class GeoPackageSource {
         try (Connection c = open(file)) {
             for (String t : featureTables(c, file)) tables.add(table(c, t, file));
         } catch (SQLException e) {
-            throw new InputException(file + ": cannot read GeoPackage: " + e.getMessage(), e);
+            throw unreadable(file, e);
         }
         Map<String, String> words = new java.util.concurrent.ConcurrentHashMap<>();
         List<Chunk> chunks = new ArrayList<>();
@@ -120,7 +122,7 @@ final class GeoPackageSource {
         } catch (java.util.concurrent.ExecutionException e) {
             Throwable cause = e.getCause();
             if (cause instanceof InputException ie) throw ie;
-            if (cause instanceof SQLException se) throw new InputException(file + ": cannot read GeoPackage: " + se.getMessage(), se);
+            if (cause instanceof SQLException se) throw unreadable(file, se);
             if (cause instanceof RuntimeException re) throw re;
             if (cause instanceof Error er) throw er;
             throw new IllegalStateException(cause);
@@ -148,12 +150,52 @@ final class GeoPackageSource {
         }
     }
 
-    /** A read-only connection: {@code file:} URI with {@code mode=ro}, and the driver's read-only open flag. */
+    /**
+     * A read-only connection: a {@code file:} URI with {@code mode=ro} and the driver's
+     * read-only flag; with {@code immutable=1} as well when no write-ahead log
+     * ({@code NAME-wal}) lies beside the file. An immutable open takes no locks and
+     * creates nothing (a WAL-mode database opened only {@code mode=ro} would make
+     * {@code -wal} and {@code -shm} files beside the input); it ignores a write-ahead log,
+     * so when one exists the file is opened {@code mode=ro} alone, to read what the log
+     * holds. (SQLite URI parameters: sqlite.org/uri.html, "immutable" and "mode".)
+     */
     static Connection open(Path file) throws SQLException {
         SQLiteConfig config = new SQLiteConfig();
         config.setReadOnly(true);
-        String url = "jdbc:sqlite:" + file.toAbsolutePath().toUri().toString().replaceFirst("^file:/+", "file:/") + "?mode=ro";
+        Path abs = file.toAbsolutePath();
+        boolean wal = Files.exists(abs.resolveSibling(abs.getFileName() + "-wal"));
+        String url = "jdbc:sqlite:" + abs.toUri().toString().replaceFirst("^file:/+", "file:/")
+                + (wal ? "?mode=ro" : "?mode=ro&immutable=1");
         return org.sqlite.JDBC.createConnection(url, config.toProperties());
+    }
+
+    /**
+     * The message for an SQLite failure while reading {@code file}: a damaged database
+     * (SQLite's CORRUPT or NOTADB result) is "not a readable GeoPackage (file is truncated
+     * or corrupt: SQLite says ...)"; anything else "cannot read GeoPackage: SQLite says ...".
+     */
+    static InputException unreadable(Path file, SQLException e) {
+        String says = e.getMessage() == null ? "no reason given" : e.getMessage();
+        boolean damaged = false;
+        if (e instanceof org.sqlite.SQLiteException se) {
+            org.sqlite.SQLiteErrorCode code = se.getResultCode();
+            damaged = code == org.sqlite.SQLiteErrorCode.SQLITE_CORRUPT || code == org.sqlite.SQLiteErrorCode.SQLITE_NOTADB
+                    || code.name().startsWith("SQLITE_CORRUPT_") || code.name().startsWith("SQLITE_IOERR_SHORT_READ");
+            // the driver's text is "[CODE] description (sqlite's own message)": keep SQLite's own words
+            int open = says.lastIndexOf('(');
+            if (says.startsWith("[") && open > 0 && says.endsWith(")")) says = says.substring(open + 1, says.length() - 1);
+        }
+        if (damaged) {
+            return new InputException(file + ": not a readable GeoPackage (file is truncated or corrupt: SQLite says \""
+                    + says + "\")", e);
+        }
+        Path abs = file.toAbsolutePath();
+        if (Files.exists(abs.resolveSibling(abs.getFileName() + "-wal"))) {
+            return new InputException(file + ": cannot read GeoPackage: SQLite says \"" + says + "\"; the file has a write-ahead log ("
+                    + abs.getFileName() + "-wal) that SQLite cannot open here (it needs the -shm file beside it, or a folder it may"
+                    + " write to); close the file in the program that wrote it, which folds the log into the file", e);
+        }
+        return new InputException(file + ": cannot read GeoPackage: SQLite says \"" + says + "\"", e);
     }
 
     private static void checkMagic(Path file) throws InputException {
@@ -256,11 +298,11 @@ final class GeoPackageSource {
                         byte[] blob = r.getBytes(2);
                         RawLayer.Feature f;
                         if (blob == null) {
-                            f = new RawLayer.Feature(fid, null, null, Arrays.asList(vals));
+                            f = new RawLayer.Feature(fid, null, null, vals);
                         } else {
                             GpkgGeometry.Result g = geom.decode(blob);
                             f = new RawLayer.Feature(fid, g.geometry(), g.error() == null ? null
-                                    : "geometry (field " + geomColumn + ") not readable: " + g.error(), Arrays.asList(vals));
+                                    : "geometry (field " + geomColumn + ") not readable: " + g.error(), vals);
                         }
                         fs.add(f);
                     }

@@ -89,6 +89,17 @@ final class LayerDecoder {
     }
 
     static List<Row> decode(Schema.Layer layer, RawLayer raw, FieldMapping mapping, Findings findings) throws InputException {
+        return decode(layer, raw, mapping, findings, r -> r, false);
+    }
+
+    /**
+     * Decodes the layer and hands each row to {@code make} at once, keeping only what
+     * it returns (the model record), so no list of rows is held. With {@code release}
+     * each raw feature is dropped from {@code raw} once used (the caller must be the
+     * layer's only reader). Findings are the same, in the same order, as {@link #decode}.
+     */
+    static <T> List<T> decode(Schema.Layer layer, RawLayer raw, FieldMapping mapping, Findings findings,
+                              java.util.function.Function<Row, T> make, boolean release) throws InputException {
         if (raw.features().isEmpty()) {
             findings.add(Finding.of("empty-layer", Severity.WARNING, layer.name(), "layer " + raw.name() + " (" + raw.where()
                     + ") has no features"));
@@ -96,7 +107,7 @@ final class LayerDecoder {
         }
         LayerDecoder d = new LayerDecoder(layer, raw, mapping, findings);
         d.resolveFields();
-        return d.rows();
+        return d.rows(make, release);
     }
 
     private void resolveFields() throws InputException {
@@ -124,12 +135,16 @@ final class LayerDecoder {
         return -1;
     }
 
-    private List<Row> rows() {
+    private <T> List<T> rows(java.util.function.Function<Row, T> make, boolean release) {
         checkMixed();
-        List<Row> out = new ArrayList<>(raw.features().size());
-        Set<String> ids = new HashSet<>(raw.features().size() * 4 / 3 + 16);
-        for (RawLayer.Feature f : raw.features()) {
-            Object idRaw = column[0] < 0 ? null : f.values().get(column[0]);
+        List<RawLayer.Feature> features = raw.features();
+        int n = features.size();
+        List<T> out = new ArrayList<>(n);
+        Set<String> ids = new HashSet<>(n * 4 / 3 + 16);
+        for (int k = 0; k < n; k++) {
+            RawLayer.Feature f = features.get(k);
+            if (release) raw.release(k);
+            Object idRaw = column[0] < 0 ? null : f.value(column[0]);
             String id = text(idRaw);
             Where at = new Where(raw, f.fid(), id);
             if (!geometryOk(f, at, id)) continue;
@@ -148,9 +163,9 @@ final class LayerDecoder {
             vals[0] = id;
             for (int i = 1; i < column.length; i++) {
                 Schema.Field field = layer.fields().get(i);
-                vals[i] = value(field, column[i] < 0 ? null : f.values().get(column[i]), at, id, c);
+                vals[i] = value(field, column[i] < 0 ? null : f.value(column[i]), at, id, c);
             }
-            out.add(new Row(id, f.geometry(), Arrays.asList(vals)));
+            out.add(make.apply(new Row(id, f.geometry(), Arrays.asList(vals))));
         }
         return out;
     }

@@ -87,7 +87,7 @@ public final class NetworkReader {
         kinds.add(Schema.MAINS);
         work.add(() -> {
             Findings own = new Findings();
-            return new Decoded(mainsOf(LayerDecoder.decode(Schema.MAINS, mainsStarted, mapping, own)), own);
+            return new Decoded(LayerDecoder.decode(Schema.MAINS, mainsStarted, mapping, own, NetworkReader::main, true), own);
         });
         for (Schema.Layer l : Schema.LAYERS) {
             if (l == Schema.MAINS) continue;
@@ -99,15 +99,15 @@ public final class NetworkReader {
             work.add(() -> {
                 Findings own = new Findings();
                 own.addAll(adoptFindings.list());
-                List<LayerDecoder.Row> r = LayerDecoder.decode(l, adopted, mapping, own);
-                Object records = switch (l.name()) {
-                    case "valves" -> valves(r);
-                    case "stations" -> stations(r);
-                    case "sense_taps" -> taps(r);
-                    case "services" -> services(r);
-                    case "sources" -> sources(r);
+                java.util.function.Function<LayerDecoder.Row, ?> make = switch (l.name()) {
+                    case "valves" -> NetworkReader::valve;
+                    case "stations" -> NetworkReader::station;
+                    case "sense_taps" -> NetworkReader::tap;
+                    case "services" -> NetworkReader::service;
+                    case "sources" -> NetworkReader::source;
                     default -> throw new IllegalStateException("no model records for layer " + l.name());
                 };
+                Object records = LayerDecoder.decode(l, adopted, mapping, own, make, true);
                 return new Decoded(records, own);
             });
         }
@@ -190,67 +190,67 @@ public final class NetworkReader {
         return null;
     }
 
-    private static List<Main> mainsOf(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.MAINS;
-        List<Main> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            Integer yr = r.get(s, "install_yr");
-            out.add(new Main(r.id(), r.get(s, "system_id"), (MainStatus) r.get(s, "status"), r.get(s, "material"),
-                    r.get(s, "diam_mm"), r.get(s, "maop_kpa"), yr, r.geometry()));
-        }
-        return out;
+    /** Index of a field in the layer's schema (the decoded row's value order). */
+    private static int at(Schema.Layer l, String field) {
+        for (int i = 0; i < l.fields().size(); i++) if (l.fields().get(i).name().equals(field)) return i;
+        throw new IllegalArgumentException("no field " + field + " in layer " + l.name());
     }
 
-    private static List<Valve> valves(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.VALVES;
-        List<Valve> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            LocalDate checked = r.get(s, "checked");
-            out.add(new Valve(r.id(), r.get(s, "system_id"), (ValveKind) r.get(s, "kind"),
-                    (NormalPosition) r.get(s, "normal"), (Operability) r.get(s, "operable"), checked, (Point) r.geometry()));
-        }
-        return out;
+    private static final int M_SYS = at(Schema.MAINS, "system_id"), M_STATUS = at(Schema.MAINS, "status"),
+            M_MATERIAL = at(Schema.MAINS, "material"), M_DIAM = at(Schema.MAINS, "diam_mm"),
+            M_MAOP = at(Schema.MAINS, "maop_kpa"), M_YEAR = at(Schema.MAINS, "install_yr");
+
+    private static Main main(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        return new Main(r.id(), (String) v.get(M_SYS), (MainStatus) v.get(M_STATUS), (String) v.get(M_MATERIAL),
+                (Double) v.get(M_DIAM), (Double) v.get(M_MAOP), (Integer) v.get(M_YEAR), r.geometry());
     }
 
-    private static List<Station> stations(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.STATIONS;
-        List<Station> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            out.add(new Station(r.id(), r.get(s, "in_sys"), r.get(s, "out_sys"), r.get(s, "set_kpa"),
-                    r.get(s, "monitor_kpa"), r.get(s, "relief_kpa"), r.get(s, "name"), (Point) r.geometry(),
-                    ((Schema.YesNo) r.get(s, "relief_full")).value()));
-        }
-        return out;
+    private static final int V_SYS = at(Schema.VALVES, "system_id"), V_KIND = at(Schema.VALVES, "kind"),
+            V_NORMAL = at(Schema.VALVES, "normal"), V_OPERABLE = at(Schema.VALVES, "operable"),
+            V_CHECKED = at(Schema.VALVES, "checked");
+
+    private static Valve valve(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        return new Valve(r.id(), (String) v.get(V_SYS), (ValveKind) v.get(V_KIND), (NormalPosition) v.get(V_NORMAL),
+                (Operability) v.get(V_OPERABLE), (LocalDate) v.get(V_CHECKED), (Point) r.geometry());
     }
 
-    private static List<SenseTap> taps(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.SENSE_TAPS;
-        List<SenseTap> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            out.add(new SenseTap(r.id(), r.get(s, "station_id"), (TapDevice) r.get(s, "device"), (Point) r.geometry()));
-        }
-        return out;
+    private static final int ST_IN = at(Schema.STATIONS, "in_sys"), ST_OUT = at(Schema.STATIONS, "out_sys"),
+            ST_SET = at(Schema.STATIONS, "set_kpa"), ST_MONITOR = at(Schema.STATIONS, "monitor_kpa"),
+            ST_RELIEF = at(Schema.STATIONS, "relief_kpa"), ST_NAME = at(Schema.STATIONS, "name"),
+            ST_FULL = at(Schema.STATIONS, "relief_full");
+
+    private static Station station(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        return new Station(r.id(), (String) v.get(ST_IN), (String) v.get(ST_OUT), (Double) v.get(ST_SET),
+                (Double) v.get(ST_MONITOR), (Double) v.get(ST_RELIEF), (String) v.get(ST_NAME), (Point) r.geometry(),
+                ((Schema.YesNo) v.get(ST_FULL)).value());
     }
 
-    private static List<Service> services(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.SERVICES;
-        List<Service> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            Integer meters = r.get(s, "meters");
-            out.add(new Service(r.id(), r.get(s, "system_id"), (ServiceClass) r.get(s, "class"),
-                    meters == null ? 1 : meters, r.get(s, "critical"), r.get(s, "main_id"), r.get(s, "address"),
-                    (Point) r.geometry()));
-        }
-        return out;
+    private static final int T_STATION = at(Schema.SENSE_TAPS, "station_id"), T_DEVICE = at(Schema.SENSE_TAPS, "device");
+
+    private static SenseTap tap(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        return new SenseTap(r.id(), (String) v.get(T_STATION), (TapDevice) v.get(T_DEVICE), (Point) r.geometry());
     }
 
-    private static List<Source> sources(List<LayerDecoder.Row> rows) {
-        Schema.Layer s = Schema.SOURCES;
-        List<Source> out = new ArrayList<>(rows.size());
-        for (LayerDecoder.Row r : rows) {
-            out.add(new Source(r.id(), r.get(s, "system_id"), r.get(s, "kpa"), (Point) r.geometry()));
-        }
-        return out;
+    private static final int S_SYS = at(Schema.SERVICES, "system_id"), S_CLASS = at(Schema.SERVICES, "class"),
+            S_METERS = at(Schema.SERVICES, "meters"), S_CRITICAL = at(Schema.SERVICES, "critical"),
+            S_MAIN = at(Schema.SERVICES, "main_id"), S_ADDRESS = at(Schema.SERVICES, "address");
+
+    private static Service service(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        Integer meters = (Integer) v.get(S_METERS);
+        return new Service(r.id(), (String) v.get(S_SYS), (ServiceClass) v.get(S_CLASS), meters == null ? 1 : meters,
+                (String) v.get(S_CRITICAL), (String) v.get(S_MAIN), (String) v.get(S_ADDRESS), (Point) r.geometry());
+    }
+
+    private static final int SRC_SYS = at(Schema.SOURCES, "system_id"), SRC_KPA = at(Schema.SOURCES, "kpa");
+
+    private static Source source(LayerDecoder.Row r) {
+        List<Object> v = r.values();
+        return new Source(r.id(), (String) v.get(SRC_SYS), (Double) v.get(SRC_KPA), (Point) r.geometry());
     }
 
     /** A context layer: every feature with a geometry, attributes by field name (numbers as Long or Double). */

@@ -5,7 +5,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Stream;
@@ -62,7 +61,7 @@ final class ShapefileSource {
             if (table.isDeleted(i)) continue; // marked deleted in the .dbf: not a feature (as GDAL reads it)
             Geometry g = geo.geometries().get(i);
             fs.add(new RawLayer.Feature(i + 1, g == null || g.isEmpty() ? null : g, null,
-                    Arrays.asList(table.rows().get(i))));
+                    table.rows().get(i)));
         }
         return new RawLayer(base, shp.toString(), true, table.fields(), fs, crs);
     }
