@@ -50,7 +50,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "cards", mixinStandardHelpOptions = true,
     description = "Emergency cards per plan phase: shut-off at the work site and for over-pressure, for briefings and the fire department.")
-public final class CardsCommand implements Callable<Integer> {
+public final class CardsCommand implements Callable<Integer>, WriteGuard.Writes {
     @Spec private CommandSpec spec;
 
     @Mixin private NetworkOptions input;
@@ -70,6 +70,16 @@ public final class CardsCommand implements Callable<Integer> {
     @Mixin private SettingsOptions settingsOptions;
     @Mixin private ResponseOptions responseOptions;
     @Mixin private Formats.TextJson format;
+
+    @Override
+    public List<Path> outputs() {
+        return noPdf ? List.of() : List.of(out.resolve("emergency-cards.pdf"));
+    }
+
+    @Override
+    public Path outputFolder() {
+        return noPdf ? null : out;
+    }
 
     @Override
     public Integer call() throws InputException, PlanException {

@@ -44,7 +44,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
     description = "Write maps (PDF, PNG, SVG), map book, valve and customer lists and result layers of a plan step or an incident.")
-public final class ExportCommand implements Callable<Integer> {
+public final class ExportCommand implements Callable<Integer>, WriteGuard.Writes {
 
     static final class Where {
         @Option(names = "--plan", paramLabel = "PLAN", description = "a work plan (YAML); with --step")
@@ -103,6 +103,16 @@ public final class ExportCommand implements Callable<Integer> {
     @Mixin private SettingsOptions settings;
     @Mixin private PlanCheckOptions checks;
     @Mixin private ResponseOptions response;
+
+    @Override
+    public List<Path> outputs() {
+        return ReportBuilder.targets(out);
+    }
+
+    @Override
+    public Path outputFolder() {
+        return out;
+    }
 
     @Override
     public Integer call() {

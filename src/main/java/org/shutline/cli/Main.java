@@ -52,6 +52,12 @@ public final class Main implements Runnable {
         // data problems reach every command: a run whose network gave error-level findings
         // prints one line about them (DataErrors) and does not exit 0
         cl.setExecutionStrategy(parsed -> {
+            // before anything is read or written: no output may be an input of this run (WriteGuard)
+            try {
+                WriteGuard.check(parsed);
+            } catch (org.shutline.io.InputException e) {
+                return NetworkInput.badInput(parsed.commandSpec().commandLine().getErr(), e.getMessage());
+            }
             DataErrors.begin(parsed.commandSpec().commandLine().getErr());
             int code;
             int errors;

@@ -452,8 +452,8 @@ public final class ReportBuilder {
         return p;
     }
 
-    /** Every path {@link #write} may write into {@code dir}. */
-    List<Path> targets(Path dir) {
+    /** Every path {@link #write} may write into {@code dir} (the command line's input check uses it before anything is read). */
+    public static List<Path> targets(Path dir) {
         List<Path> t = new ArrayList<>();
         for (String n : List.of("report.pdf", "map.png", "map.svg", "results.gpkg", "valves.csv", "customers.csv",
                 "chart-steps.png", "chart-phases.png", "chart-steps.svg", "chart-phases.svg")) {
