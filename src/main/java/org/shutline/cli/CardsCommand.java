@@ -85,6 +85,7 @@ public final class CardsCommand implements Callable<Integer>, WriteGuard.Writes 
     public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        OptionRange.PIT_RADIUS.check("cards", pitRadius);
         AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
         Workspace t = input.open(s);
         PlanStates ps = PlanApplier.apply(PlanReader.read(planFile), t.base(), planFile.getFileName().toString());

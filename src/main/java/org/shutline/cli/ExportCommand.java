@@ -153,7 +153,11 @@ public final class ExportCommand implements Callable<Integer>, WriteGuard.Writes
         if (where.at != null && where.at.length != 2) return "export: --at takes X,Y";
         if (Paper.parse(paper).isEmpty()) return "export: unknown paper '" + paper + "' (letter, tabloid, a4, a3)";
         if (dpi < 10 || dpi > 1200) return "export: --dpi must be 10 to 1200";
-        if (!(radiusM > 0)) return "export: --radius-m must be positive";
+        try {
+            OptionRange.RADIUS_M.check("export", radiusM);
+        } catch (InputException e) {
+            return e.getMessage();
+        }
         for (String f : formats) {
             if (ReportBuilder.Format.parse(f).isEmpty()) return "export: unknown format '" + f + "' (pdf, png, svg, gpkg, geojson, csv)";
         }
