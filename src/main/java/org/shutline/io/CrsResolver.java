@@ -17,7 +17,8 @@ import org.shutline.model.Severity;
  *
  * <p>The mains' CRS decides. Geographic mains are re-projected to the WGS 84 UTM
  * zone of the mains' mean longitude (north or south by mean latitude), with a NOTE
- * {@code reprojected}. A layer whose CRS differs from the mains' (by EPSG code or
+ * {@code reprojected}; so are Mercator mains (Web Mercator, EPSG:3857), whose scale
+ * grows as 1/cos(latitude), with a NOTE giving the scale at their mean latitude. A layer whose CRS differs from the mains' (by EPSG code or
  * proj4 definition) is re-projected to the network CRS, with a NOTE. A layer with
  * no CRS: if its coordinates look like degrees (all within +-180 / +-90) it is an
  * {@link InputException}, unless the mains are geographic, when the mains' CRS is
@@ -49,6 +50,21 @@ final class CrsResolver {
             return mains;
         }
         mainsCrs = mains.crs();
+        if (isMercator(mainsCrs)) {
+            // Mercator scale is 1/cos(latitude): its "metres" are not metres on the ground (x1.35 at 42 N)
+            double[] mean = meanXy(mains);
+            double[] ll = Crs.toLonLat(mainsCrs).apply(mean[0], mean[1]);
+            if (!Double.isFinite(ll[0]) || !Double.isFinite(ll[1])) {
+                throw new InputException(mains.where() + ": layer " + mains.name() + " is in Mercator (" + mainsCrs.name()
+                        + ") but its coordinates are outside the projection (reading " + source + ")");
+            }
+            target = Crs.utmFor(ll[0], ll[1]);
+            findings.add(Finding.of("reprojected", Severity.NOTE, "mains", String.format(java.util.Locale.ROOT,
+                    "layer %s is in Mercator (%s), whose lengths are not lengths on the ground (x%.2f at %.1f degrees latitude);"
+                    + " re-projected with all layers to %s (%s)", mains.name(), mainsCrs.name(),
+                    1 / Math.cos(Math.toRadians(ll[1])), ll[1], zoneName(target), target.name())));
+            return reproject(mains, mainsCrs, target);
+        }
         if (!Crs.isGeographic(mainsCrs)) {
             target = mainsCrs;
             return mains;
@@ -96,6 +112,11 @@ final class CrsResolver {
         return new InputException(l.where() + ": layer " + l.name() + " has " + (l.dbf() ? "no .prj" : "no CRS")
                 + " and its coordinates look like degrees of longitude/latitude; add a .prj (or CRS) so it can be re-projected"
                 + " (reading " + source + ")");
+    }
+
+    /** True for a Mercator projection (Web Mercator EPSG:3857 and its older codes, World Mercator): not fit for lengths. */
+    static boolean isMercator(CrsInfo c) {
+        return c.proj4() != null && c.proj4().contains("+proj=merc");
     }
 
     static String zoneName(CrsInfo utm) {
