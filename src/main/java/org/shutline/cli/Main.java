@@ -48,6 +48,7 @@ public final class Main implements Runnable {
 
     /** The configured command line (used by {@link #main} and the tests). */
     public static CommandLine commandLine() {
+        quietLibraryLogging();
         CommandLine cl = new CommandLine(new Main());
         // data problems reach every command: a run whose network gave error-level findings
         // prints one line about them (DataErrors) and does not exit 0
@@ -91,6 +92,19 @@ public final class Main implements Runnable {
             return INTERNAL_ERROR;
         });
         return cl;
+    }
+
+    /**
+     * Library log lines (java.util.logging, which the GeoPackage and SQLite libraries use)
+     * never reach the terminal: a file problem reaches the user as one located message
+     * from our own handler. {@code SHUTLINE_LIBRARY_LOG=1} keeps them, for a bug report.
+     */
+    static void quietLibraryLogging() {
+        if (System.getenv("SHUTLINE_LIBRARY_LOG") != null) return;
+        java.util.logging.Logger root = java.util.logging.LogManager.getLogManager().getLogger("");
+        if (root == null) return;
+        for (java.util.logging.Handler h : root.getHandlers()) root.removeHandler(h);
+        root.setLevel(java.util.logging.Level.OFF);
     }
 
     @Override
