@@ -144,7 +144,8 @@ final class BadInputCorpus {
         Path latin = shpCopy("dbf-latin1-cpg-utf8");
         // the first id character of the first record becomes a latin-1 e-acute (0xE9), while the .cpg says UTF-8
         replaceFirstIdByte(latin.resolve("mains.dbf"), (byte) 0xE9);
-        add("dbf-latin1-cpg-utf8", List.of("trace", latin.toString()), Set.of(0, 1, 2), List.of("dbf-latin1-cpg-utf8"), files(latin));
+        add("dbf-latin1-cpg-utf8", List.of("trace", latin.toString()), Set.of(2),
+                List.of("dbf-latin1-cpg-utf8/mains.dbf: record 1, field", "not UTF-8", "mains.cpg"), files(latin));
 
         Path text = shpCopy("dbf-numeric-text");
         overwriteNumericField(text.resolve("mains.dbf"));
