@@ -43,6 +43,7 @@ final class CrsResolver {
     /** Decides the network CRS from the mains layer and returns the mains in it. */
     RawLayer start(RawLayer mains, Findings findings) throws InputException {
         Envelope env = envelope(mains);
+        if (mains.crs() == null || !Crs.isGeographic(mains.crs())) checkPlausible(mains);
         if (mains.crs() == null) {
             if (looksLikeDegrees(env)) throw degrees(mains);
             target = CrsInfo.UNKNOWN_METRES;
@@ -118,6 +119,31 @@ final class CrsResolver {
     static boolean isMercator(CrsInfo c) {
         return c.proj4() != null && c.proj4().contains("+proj=merc");
     }
+
+    /**
+     * No projected CRS of the Earth has coordinates beyond half the equator, 20,037.5 km
+     * (Web Mercator's edge; UTM and state plane stay far inside it): a mains layer that
+     * reaches past it has a wrong CRS or broken coordinates, and lengths and distances
+     * from it would mean nothing. Refused naming the layer and the first such feature.
+     */
+    private void checkPlausible(RawLayer l) throws InputException {
+        double perUnit = l.crs() == null ? 1 : l.crs().unit().metres();
+        for (RawLayer.Feature f : l.features()) {
+            if (f.geometry() == null) continue;
+            Envelope e = f.geometry().getEnvelopeInternal();
+            double far = Math.max(Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())),
+                    Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY()))) * perUnit;
+            if (!(far <= EARTH_HALF_EQUATOR_M * 1.001)) {
+                throw new InputException(l.where() + ": layer " + l.name() + ", feature " + f.fid() + ": coordinates reach "
+                        + String.format(java.util.Locale.ROOT, "%.4g", far) + " m from the origin, beyond any projected CRS of the Earth"
+                        + " (20,037 km); the CRS (" + (l.crs() == null ? "none, metres assumed" : l.crs().name())
+                        + ") or the coordinates are wrong (reading " + source + ")");
+            }
+        }
+    }
+
+    /** Half the WGS 84 equator, pi * 6,378,137 m: the largest easting of Web Mercator (EPSG:3857). */
+    static final double EARTH_HALF_EQUATOR_M = Math.PI * 6_378_137.0;
 
     static String zoneName(CrsInfo utm) {
         int code = utm.epsg();

@@ -147,6 +147,11 @@ final class BadInputCorpus {
         add("dbf-latin1-cpg-utf8", List.of("trace", latin.toString()), Set.of(2),
                 List.of("dbf-latin1-cpg-utf8/mains.dbf: record 1, field", "not UTF-8", "mains.cpg"), files(latin));
 
+        Path far = shpCopy("shp-far-coordinates");
+        farFirstPoint(far.resolve("mains.shp"));
+        add("shp-far-coordinates", List.of("trace", far.toString()), Set.of(2),
+                List.of("shp-far-coordinates/mains.shp", "layer mains, feature 1", "beyond any projected CRS"), files(far));
+
         Path text = shpCopy("dbf-numeric-text");
         overwriteNumericField(text.resolve("mains.dbf"));
         add("dbf-numeric-text", List.of("trace", text.toString()), Set.of(1, 2), List.of("mains"), files(text));
@@ -164,6 +169,23 @@ final class BadInputCorpus {
         try (Stream<Path> s = Files.list(d)) {
             return s.sorted(Comparator.naturalOrder()).toList();
         }
+    }
+
+    /**
+     * The first point of the first record set to x = 1e12 (a polyline record: 8-byte record header, shape type, a
+     * 32-byte box, part and point counts, part starts, then x, y little-endian doubles; ESRI Shapefile Technical
+     * Description, 1998), with the record's box widened to match.
+     */
+    private static void farFirstPoint(Path shp) throws IOException {
+        byte[] b = Files.readAllBytes(shp);
+        java.nio.ByteBuffer le = java.nio.ByteBuffer.wrap(b).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        int content = 108;
+        int parts = le.getInt(content + 36);
+        int firstX = content + 44 + 4 * parts;
+        le.putDouble(firstX, 1e12);
+        le.putDouble(content + 20, 1e12); // the record's Xmax
+        le.putDouble(68, 1e12); // the file header's Xmax
+        Files.write(shp, b);
     }
 
     private static void truncate(Path f, double fraction) throws IOException {
