@@ -75,7 +75,7 @@ final class WriteGuard {
             Path real = realOrPlanned(out);
             Path in = inputs.get(real);
             if (in != null) {
-                throw new InputException(name + ": refusing to write " + out + ": it is " + describe(in) + " read by this command ("
+                throw new InputException(name + ": refusing to write " + out + ": it is an input " + describe(in) + " read by this command ("
                         + in + "); nothing was written. Choose another " + w.outputOption() + (folder == null ? "" : " folder")
                         + " or move the input.");
             }
@@ -136,7 +136,7 @@ final class WriteGuard {
     }
 
     private static String describe(Path in) {
-        return Files.isDirectory(in) ? "a folder" : "a file";
+        return Files.isDirectory(in) ? "folder" : "file";
     }
 
     private static void checkFolder(String command, String option, Path folder) throws InputException {

@@ -39,6 +39,8 @@ class BadInputCorpusTest {
 
     @TestFactory
     Stream<DynamicTest> corpus() throws Exception {
+        // one line per case (name, exit, first message line) for reading the corpus: target/bad-input-corpus.txt
+        Files.deleteIfExists(Path.of("target/bad-input-corpus.txt"));
         List<BadInputCorpus.Case> cases = BadInputCorpus.build(dir);
         assertThat(cases).hasSizeGreaterThanOrEqualTo(40);
         assertThat(cases.stream().map(BadInputCorpus.Case::name).distinct().count()).isEqualTo(cases.size());
