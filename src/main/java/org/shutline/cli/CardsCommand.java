@@ -51,7 +51,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "cards", mixinStandardHelpOptions = true,
     description = "Emergency cards per plan phase: shut-off at the work site and for over-pressure, for briefings and the fire department.")
-public final class CardsCommand implements Callable<Integer> {
+public final class CardsCommand implements Callable<Integer>, WriteGuard.Writes {
     @Spec private CommandSpec spec;
 
     @Mixin private NetworkOptions input;
@@ -73,9 +73,20 @@ public final class CardsCommand implements Callable<Integer> {
     @Mixin private Formats.TextJson format;
 
     @Override
+    public List<Path> outputs() {
+        return noPdf ? List.of() : List.of(out.resolve("emergency-cards.pdf"));
+    }
+
+    @Override
+    public Path outputFolder() {
+        return noPdf ? null : out;
+    }
+
+    @Override
     public Integer call() throws InputException, PlanException {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        OptionRange.PIT_RADIUS.check("cards", pitRadius);
         AnalysisSettings s = responseOptions.apply(settingsOptions.settings());
         Workspace t = input.open(s);
         PlanStates ps = PlanApplier.apply(PlanReader.read(planFile), t.base(), planFile.getFileName().toString());

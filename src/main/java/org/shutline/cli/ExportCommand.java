@@ -44,7 +44,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "export", mixinStandardHelpOptions = true,
     description = "Write maps (PDF, PNG, SVG), map book, valve and customer lists and result layers of a plan step or an incident.")
-public final class ExportCommand implements Callable<Integer> {
+public final class ExportCommand implements Callable<Integer>, WriteGuard.Writes {
 
     static final class Where {
         @Option(names = "--plan", paramLabel = "PLAN", description = "a work plan (YAML); with --step")
@@ -105,6 +105,16 @@ public final class ExportCommand implements Callable<Integer> {
     @Mixin private ResponseOptions response;
 
     @Override
+    public List<Path> outputs() {
+        return ReportBuilder.targets(out);
+    }
+
+    @Override
+    public Path outputFolder() {
+        return out;
+    }
+
+    @Override
     public Integer call() {
         PrintWriter o = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
@@ -143,7 +153,11 @@ public final class ExportCommand implements Callable<Integer> {
         if (where.at != null && where.at.length != 2) return "export: --at takes X,Y";
         if (Paper.parse(paper).isEmpty()) return "export: unknown paper '" + paper + "' (letter, tabloid, a4, a3)";
         if (dpi < 10 || dpi > 1200) return "export: --dpi must be 10 to 1200";
-        if (!(radiusM > 0)) return "export: --radius-m must be positive";
+        try {
+            OptionRange.RADIUS_M.check("export", radiusM);
+        } catch (InputException e) {
+            return e.getMessage();
+        }
         for (String f : formats) {
             if (ReportBuilder.Format.parse(f).isEmpty()) return "export: unknown format '" + f + "' (pdf, png, svg, gpkg, geojson, csv)";
         }

@@ -20,7 +20,9 @@ import picocli.CommandLine.Model.CommandSpec;
  * {@code shutline generate OUT [--mains N] [--seed S] [--format gpkg|shp]}: writes the
  * sample town ({@link SampleTown}) or, with {@code --mains}, a synthetic grid town of
  * exactly N mains ({@link GridTown}). The format defaults to gpkg when OUT ends in
- * {@code .gpkg}, else shp (OUT is then a folder). Exit 0, or 2 when OUT cannot be written.
+ * {@code .gpkg}, else shp (OUT is then a folder). An existing OUT file, or an existing
+ * folder that is not empty, is refused unless {@code --force} is given. Exit 0, or 2
+ * when OUT cannot be written or is refused.
  */
 @Command(name = "generate", mixinStandardHelpOptions = true,
     description = "Write the sample town, or a large synthetic grid town for benchmarks.")
@@ -43,12 +45,20 @@ public final class GenerateCommand implements Callable<Integer> {
     @Option(names = "--format", description = "gpkg or shp (default: from OUT's extension)")
     private Format format;
 
+    @Option(names = "--force", description = "write over an existing OUT file, or into a folder that is not empty")
+    private boolean force;
+
     @Override
     public Integer call() {
         PrintWriter o = spec.commandLine().getOut();
         long s = seed == null ? SampleTown.DEFAULT_SEED : seed;
         if (mains != null && mains < 20) {
             spec.commandLine().getErr().println("--mains must be at least 20");
+            return 2;
+        }
+        String taken = force ? null : taken(out);
+        if (taken != null) {
+            spec.commandLine().getErr().println("generate: " + taken + "; give --force to write over it, or another OUT");
             return 2;
         }
         GeneratedTown town = mains == null ? SampleTown.generate(s) : GridTown.generate(mains, s);
@@ -68,5 +78,18 @@ public final class GenerateCommand implements Callable<Integer> {
             n.sources().size());
         o.flush();
         return 0;
+    }
+
+    /** Why writing to {@code out} would replace something already there, or null when nothing is there. */
+    static String taken(Path out) {
+        if (java.nio.file.Files.isRegularFile(out)) return out + " exists";
+        if (java.nio.file.Files.isDirectory(out)) {
+            try (java.util.stream.Stream<Path> s = java.nio.file.Files.list(out)) {
+                if (s.findAny().isPresent()) return out + " is a folder that is not empty";
+            } catch (IOException e) {
+                return out + " is a folder that cannot be listed (" + e.getMessage() + ")";
+            }
+        }
+        return null;
     }
 }

@@ -146,7 +146,10 @@ final class Locations {
         @Override
         public Double convert(String value) {
             double d = new FiniteNumber().convert(value);
-            if (!(d > 0)) throw new CommandLine.TypeConversionException("'" + value + "' is not a positive distance in metres");
+            if (!(d > 0) || d > OptionRange.MAX_DISTANCE_M.max()) {
+                throw new CommandLine.TypeConversionException("'" + value + "' is not a distance in metres more than 0 and at most "
+                        + OptionRange.num(OptionRange.MAX_DISTANCE_M.max()));
+            }
             return d;
         }
     }

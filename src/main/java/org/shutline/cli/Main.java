@@ -48,10 +48,17 @@ public final class Main implements Runnable {
 
     /** The configured command line (used by {@link #main} and the tests). */
     public static CommandLine commandLine() {
+        quietLibraryLogging();
         CommandLine cl = new CommandLine(new Main());
         // data problems reach every command: a run whose network gave error-level findings
         // prints one line about them (DataErrors) and does not exit 0
         cl.setExecutionStrategy(parsed -> {
+            // before anything is read or written: no output may be an input of this run (WriteGuard)
+            try {
+                WriteGuard.check(parsed);
+            } catch (org.shutline.io.InputException e) {
+                return NetworkInput.badInput(parsed.commandSpec().commandLine().getErr(), e.getMessage());
+            }
             DataErrors.begin(parsed.commandSpec().commandLine().getErr());
             int code;
             int errors;
@@ -85,6 +92,19 @@ public final class Main implements Runnable {
             return INTERNAL_ERROR;
         });
         return cl;
+    }
+
+    /**
+     * Library log lines (java.util.logging, which the GeoPackage and SQLite libraries use)
+     * never reach the terminal: a file problem reaches the user as one located message
+     * from our own handler. {@code SHUTLINE_LIBRARY_LOG=1} keeps them, for a bug report.
+     */
+    static void quietLibraryLogging() {
+        if (System.getenv("SHUTLINE_LIBRARY_LOG") != null) return;
+        java.util.logging.Logger root = java.util.logging.LogManager.getLogManager().getLogger("");
+        if (root == null) return;
+        for (java.util.logging.Handler h : root.getHandlers()) root.removeHandler(h);
+        root.setLevel(java.util.logging.Level.OFF);
     }
 
     @Override

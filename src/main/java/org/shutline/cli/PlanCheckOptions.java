@@ -36,9 +36,7 @@ final class PlanCheckOptions {
             s = s.withLowPressureLimit(p);
         }
         if (sensingLineM != null) {
-            if (!(sensingLineM >= 0) || Double.isInfinite(sensingLineM)) {
-                throw new InputException(command + ": --sensing-line-m takes a distance of 0 m or more, not " + sensingLineM);
-            }
+            OptionRange.SENSING_LINE_M.check(command, sensingLineM);
             s = s.withSensingLineM(sensingLineM);
         }
         return s;

@@ -43,7 +43,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
     description = "Evaluate a work plan step by step: customers off gas, valves, hazards.")
-public final class PlanCommand implements Callable<Integer> {
+public final class PlanCommand implements Callable<Integer>, WriteGuard.Writes {
     @Spec private CommandSpec spec;
 
     @Mixin private NetworkOptions input;
@@ -58,6 +58,16 @@ public final class PlanCommand implements Callable<Integer> {
 
     @Mixin private SettingsOptions settings;
     @Mixin private PlanCheckOptions checks;
+
+    @Override
+    public List<Path> outputs() {
+        return out == null ? List.of() : List.of(out.resolve("plan-steps.csv"), out.resolve("plan-hazards.csv"), out.resolve("plan.json"));
+    }
+
+    @Override
+    public Path outputFolder() {
+        return out;
+    }
 
     @Override
     public Integer call() throws InputException, PlanException {

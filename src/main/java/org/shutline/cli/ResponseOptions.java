@@ -34,6 +34,13 @@ final class ResponseOptions {
 
     /** {@code s} with the options given; a value out of range is an {@link InputException}. */
     AnalysisSettings apply(AnalysisSettings s) throws InputException {
+        String command = null;
+        if (crews != null) OptionRange.CREWS.check(command, crews.doubleValue());
+        OptionRange.TARGET_HOURS.check(command, targetHours);
+        OptionRange.RELIGHT_HOURS.check(command, relightHours);
+        OptionRange.VALVE_MINUTES.check(command, valveMinutes);
+        OptionRange.SPEED.check(command, speed);
+        OptionRange.DETOUR.check(command, detour);
         ResponseSettings r = s.response();
         ValveRoute.Settings v = r.valves();
         try {

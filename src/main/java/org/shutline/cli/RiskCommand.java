@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "risk", mixinStandardHelpOptions = true,
     description = "All-cases outage tables: every segment and station, and the valves to fix first.")
-public final class RiskCommand implements Callable<Integer> {
+public final class RiskCommand implements Callable<Integer>, WriteGuard.Writes {
     static final List<String> SEGMENT_HEADER = List.of("rank", "segment", "system", "mains", "services_in_segment", "services_off",
             "meters_off", "critical_off", "valves_to_close", "isolable_by_valves", "also_needed");
     static final List<String> STATION_HEADER = List.of("rank", "station", "name", "in_sys", "out_sys", "in_service", "services_off",
@@ -54,6 +54,20 @@ public final class RiskCommand implements Callable<Integer> {
 
     @Option(names = "--no-map", description = "do not draw risk-map.png")
     private boolean noMap;
+
+    @Override
+    public List<Path> outputs() {
+        List<Path> files = new ArrayList<>();
+        for (String n : List.of("segments.csv", "stations.csv", "valves-to-fix.csv", "risk-segments.gpkg", "risk-map.png")) {
+            files.add(out.resolve(n));
+        }
+        return files;
+    }
+
+    @Override
+    public Path outputFolder() {
+        return out;
+    }
 
     @Override
     public Integer call() throws InputException {

@@ -25,6 +25,7 @@ final class SettingsOptions {
 
     /** The settings file's values (the defaults without one), then the options given. */
     AnalysisSettings settings() throws InputException {
+        if (inspectionMonths != null) OptionRange.INSPECTION_MONTHS.check(null, inspectionMonths.doubleValue());
         AnalysisSettings s = file.load();
         try {
             if (asOf != null) s = s.withAsOf(asOf);

@@ -48,6 +48,11 @@ public final class TraceCommand implements Callable<Integer> {
     public Integer call() throws InputException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        if (spec.commandLine().getParseResult() != null && spec.commandLine().getParseResult().hasMatchedOption("--close")
+                && (close.isEmpty() || close.stream().anyMatch(String::isBlank))) {
+            return NetworkInput.badInput(err, "trace: --close takes valve ids separated by commas; an empty id was given, so"
+                    + " nothing was traced");
+        }
         Workspace w = input.open(settings.load());
         Network net = w.network();
         NetworkState state = w.base();

@@ -17,7 +17,8 @@ import org.shutline.model.Severity;
  *
  * <p>The mains' CRS decides. Geographic mains are re-projected to the WGS 84 UTM
  * zone of the mains' mean longitude (north or south by mean latitude), with a NOTE
- * {@code reprojected}. A layer whose CRS differs from the mains' (by EPSG code or
+ * {@code reprojected}; so are Mercator mains (Web Mercator, EPSG:3857), whose scale
+ * grows as 1/cos(latitude), with a NOTE giving the scale at their mean latitude. A layer whose CRS differs from the mains' (by EPSG code or
  * proj4 definition) is re-projected to the network CRS, with a NOTE. A layer with
  * no CRS: if its coordinates look like degrees (all within +-180 / +-90) it is an
  * {@link InputException}, unless the mains are geographic, when the mains' CRS is
@@ -42,6 +43,7 @@ final class CrsResolver {
     /** Decides the network CRS from the mains layer and returns the mains in it. */
     RawLayer start(RawLayer mains, Findings findings) throws InputException {
         Envelope env = envelope(mains);
+        if (mains.crs() == null || !Crs.isGeographic(mains.crs())) checkPlausible(mains);
         if (mains.crs() == null) {
             if (looksLikeDegrees(env)) throw degrees(mains);
             target = CrsInfo.UNKNOWN_METRES;
@@ -49,6 +51,21 @@ final class CrsResolver {
             return mains;
         }
         mainsCrs = mains.crs();
+        if (isMercator(mainsCrs)) {
+            // Mercator scale is 1/cos(latitude): its "metres" are not metres on the ground (x1.35 at 42 N)
+            double[] mean = meanXy(mains);
+            double[] ll = Crs.toLonLat(mainsCrs).apply(mean[0], mean[1]);
+            if (!Double.isFinite(ll[0]) || !Double.isFinite(ll[1])) {
+                throw new InputException(mains.where() + ": layer " + mains.name() + " is in Mercator (" + mainsCrs.name()
+                        + ") but its coordinates are outside the projection (reading " + source + ")");
+            }
+            target = Crs.utmFor(ll[0], ll[1]);
+            findings.add(Finding.of("reprojected", Severity.NOTE, "mains", String.format(java.util.Locale.ROOT,
+                    "layer %s is in Mercator (%s), whose lengths are not lengths on the ground (x%.2f at %.1f degrees latitude);"
+                    + " re-projected with all layers to %s (%s)", mains.name(), mainsCrs.name(),
+                    1 / Math.cos(Math.toRadians(ll[1])), ll[1], zoneName(target), target.name())));
+            return reproject(mains, mainsCrs, target);
+        }
         if (!Crs.isGeographic(mainsCrs)) {
             target = mainsCrs;
             return mains;
@@ -97,6 +114,36 @@ final class CrsResolver {
                 + " and its coordinates look like degrees of longitude/latitude; add a .prj (or CRS) so it can be re-projected"
                 + " (reading " + source + ")");
     }
+
+    /** True for a Mercator projection (Web Mercator EPSG:3857 and its older codes, World Mercator): not fit for lengths. */
+    static boolean isMercator(CrsInfo c) {
+        return c.proj4() != null && c.proj4().contains("+proj=merc");
+    }
+
+    /**
+     * No projected CRS of the Earth has coordinates beyond half the equator, 20,037.5 km
+     * (Web Mercator's edge; UTM and state plane stay far inside it): a mains layer that
+     * reaches past it has a wrong CRS or broken coordinates, and lengths and distances
+     * from it would mean nothing. Refused naming the layer and the first such feature.
+     */
+    private void checkPlausible(RawLayer l) throws InputException {
+        double perUnit = l.crs() == null ? 1 : l.crs().unit().metres();
+        for (RawLayer.Feature f : l.features()) {
+            if (f.geometry() == null) continue;
+            Envelope e = f.geometry().getEnvelopeInternal();
+            double far = Math.max(Math.max(Math.abs(e.getMinX()), Math.abs(e.getMaxX())),
+                    Math.max(Math.abs(e.getMinY()), Math.abs(e.getMaxY()))) * perUnit;
+            if (!(far <= EARTH_HALF_EQUATOR_M * 1.001)) {
+                throw new InputException(l.where() + ": layer " + l.name() + ", feature " + f.fid() + ": coordinates reach "
+                        + String.format(java.util.Locale.ROOT, "%.4g", far) + " m from the origin, beyond any projected CRS of the Earth"
+                        + " (20,037 km); the CRS (" + (l.crs() == null ? "none, metres assumed" : l.crs().name())
+                        + ") or the coordinates are wrong (reading " + source + ")");
+            }
+        }
+    }
+
+    /** Half the WGS 84 equator, pi * 6,378,137 m: the largest easting of Web Mercator (EPSG:3857). */
+    static final double EARTH_HALF_EQUATOR_M = Math.PI * 6_378_137.0;
 
     static String zoneName(CrsInfo utm) {
         int code = utm.epsg();

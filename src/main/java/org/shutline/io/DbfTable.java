@@ -53,6 +53,7 @@ final class DbfTable {
         }
         int count = checkHeader(bytes, dbf);
         Charset cs = charset(bytes, dbf, cpg);
+        if (cs.equals(StandardCharsets.UTF_8)) checkUtf8(bytes, count, dbf, cpg);
         List<String> names = new ArrayList<>();
         List<Object[]> rows = new ArrayList<>(count);
         int rec = 0;
@@ -91,6 +92,40 @@ final class DbfTable {
             }
         }
         return row;
+    }
+
+    /**
+     * Text fields of a table whose .cpg says UTF-8 must be UTF-8: a latin-1 byte there
+     * would come out as a replacement character inside an id, so the table is refused,
+     * naming the record, the field and the byte.
+     */
+    private static void checkUtf8(byte[] b, int count, Path dbf, Path cpg) throws InputException {
+        int headerLen = le16(b, 8);
+        int recLen = le16(b, 10);
+        java.nio.charset.CharsetDecoder dec = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(java.nio.charset.CodingErrorAction.REPORT)
+                .onUnmappableCharacter(java.nio.charset.CodingErrorAction.REPORT);
+        int offset = 1;
+        for (int at = 32; at + 32 <= headerLen && b[at] != 0x0D; at += 32) {
+            int len = b[at + 16] & 0xff;
+            if (b[at + 11] == 'C') {
+                for (int r = 0; r < count; r++) {
+                    int start = headerLen + r * recLen + offset;
+                    try {
+                        dec.reset().decode(java.nio.ByteBuffer.wrap(b, start, len));
+                    } catch (java.nio.charset.CharacterCodingException e) {
+                        String name = new String(b, at, 11, StandardCharsets.US_ASCII).replace("\0", "").trim();
+                        int bad = start;
+                        while (bad < start + len && (b[bad] & 0x80) == 0) bad++;
+                        throw new InputException(dbf + ": record " + (r + 1) + ", field " + name + ": not UTF-8 text (byte 0x"
+                                + String.format("%02X", b[Math.min(bad, start + len - 1)] & 0xff) + ") although "
+                                + (cpg == null ? "the header" : cpg.getFileName()) + " says UTF-8; the table is probably in another"
+                                + " code page (latin-1?): correct the .cpg so ids are not read wrong");
+                    }
+                }
+            }
+            offset += len;
+        }
     }
 
     /** Returns the record count after checking the header against the file size. */

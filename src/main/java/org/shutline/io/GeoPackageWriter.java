@@ -66,6 +66,11 @@ public final class GeoPackageWriter {
     }
 
     private static SpatialReferenceSystem srs(GeoPackage gp, CrsInfo crs) throws SQLException {
+        if (crs.epsg() <= 0 && crs.proj4() == null) {
+            // a network with no CRS: the GeoPackage's own "undefined Cartesian SRS" row, srs_id -1 (OGC 12-128r18, 1.1.2.1.2)
+            SpatialReferenceSystem undefined = gp.getSpatialReferenceSystemDao().queryForId(-1L);
+            if (undefined != null) return undefined;
+        }
         SpatialReferenceSystem s = new SpatialReferenceSystem();
         long id = crs.epsg() > 0 ? crs.epsg() : 100000;
         s.setSrsName(crs.name());

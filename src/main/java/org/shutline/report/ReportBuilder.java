@@ -124,6 +124,9 @@ public final class ReportBuilder {
     private final Path planFile;
     private final Options options;
     private final Network network;
+    /** The first note on a sheet of a network with no known CRS: why it has no grid or geographic labels. */
+    public static final String NO_CRS_NOTE = "No CRS in the network: US National Grid references, latitude/longitude and true"
+            + " north are left off; coordinates are the file's own.";
     private final GeoTransform geo;
     private final MapPainter painter;
     private final StreetLocator streets;
@@ -271,6 +274,7 @@ public final class ReportBuilder {
     /** Lines for the side panel: valves and critical customers off gas inside {@code within} (everywhere when null). */
     private List<String> notes(Envelope within) {
         List<String> out = new ArrayList<>();
+        if (geo == null) out.add(NO_CRS_NOTE);
         for (ReportView.OperatedValve v : view.valves()) {
             if (within != null && !within.contains(v.x(), v.y())) continue;
             String where = streets.describe(v.x(), v.y());
@@ -443,8 +447,8 @@ public final class ReportBuilder {
         return p;
     }
 
-    /** Every path {@link #write} may write into {@code dir}. */
-    List<Path> targets(Path dir) {
+    /** Every path {@link #write} may write into {@code dir} (the command line's input check uses it before anything is read). */
+    public static List<Path> targets(Path dir) {
         List<Path> t = new ArrayList<>();
         for (String n : List.of("report.pdf", "map.png", "map.svg", "results.gpkg", "valves.csv", "customers.csv",
                 "chart-steps.png", "chart-phases.png", "chart-steps.svg", "chart-phases.svg")) {
