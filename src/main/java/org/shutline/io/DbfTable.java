@@ -51,8 +51,17 @@ final class DbfTable {
         } catch (IOException e) {
             throw new InputException(dbf + ": cannot read: " + e.getMessage(), e);
         }
+        checkHeader(bytes, dbf);
+        return read(bytes, dbf, charset(bytes, dbf, cpg));
+    }
+
+    /**
+     * Reads a {@code .dbf} already in memory ({@code dbf} names it in messages), text in
+     * {@code cs}, or when null in the charset of its language-driver byte (else ISO-8859-1).
+     */
+    static Result read(byte[] bytes, Path dbf, Charset charset) throws InputException {
         int count = checkHeader(bytes, dbf);
-        Charset cs = charset(bytes, dbf, cpg);
+        Charset cs = charset != null ? charset : charset(bytes, dbf, null);
         List<String> names = new ArrayList<>();
         List<Object[]> rows = new ArrayList<>(count);
         int rec = 0;
