@@ -74,7 +74,17 @@ final class DbfTable {
             // with showDeletedRows javadbf puts a pseudo-field "deleted" first; the descriptors in the file decide
             int skip = r.getFieldCount() - descriptors(bytes);
             if (skip < 0 || skip > 1) throw new InputException(dbf + ": corrupt header (field descriptors)");
-            for (int i = skip; i < r.getFieldCount(); i++) names.add(r.getField(i).getName());
+            long widths = 1; // the deletion flag
+            for (int i = skip; i < r.getFieldCount(); i++) {
+                names.add(r.getField(i).getName());
+                // javadbf takes a character field's decimal-count byte as the high byte of its length
+                int len = r.getField(i).getLength();
+                if (len < 1) throw new InputException(dbf + ": corrupt header: field " + r.getField(i).getName() + " has length " + len);
+                widths += len;
+            }
+            if (widths != recLen) {
+                throw new InputException(dbf + ": corrupt header: field lengths add up to " + widths + " bytes, the record length is " + recLen);
+            }
             for (rec = 1; rec <= count; rec++) {
                 Object[] row = r.nextRecord();
                 if (row == null) throw new InputException(dbf + ": truncated: record " + rec + " of " + count + " missing");

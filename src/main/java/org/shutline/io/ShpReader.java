@@ -167,6 +167,10 @@ final class ShpReader {
             if (start < 0 || start >= end || end > nPoints || (i == 0 && start != 0)) {
                 throw new InputException(p + ": record " + rec + ": corrupt part index " + i);
             }
+            // "A part is a connected sequence of two or more points" (ESRI Shapefile Technical Description, 1998, PolyLine)
+            if (end - start < 2) {
+                throw new InputException(p + ": record " + rec + ": part " + i + " has one point (a line needs two or more)");
+            }
             Coordinate[] cs = new Coordinate[end - start];
             for (int j = start; j < end; j++) {
                 cs[j - start] = new Coordinate(le.getDouble(pts + 16 * j), le.getDouble(pts + 16 * j + 8));

@@ -37,7 +37,7 @@ class LocationsFuzzTest {
     private static final GridSheets GRID = GridSheets.of(SAMPLE.network().crs());
 
     @FuzzTest(maxDuration = "2m")
-    @DictionaryEntries({"at\t", "usng\t", "address\t", "\t100\t", "\tIP-1", "\tLP-1", "15T", " WJ ", "513000,4890500",
+    @DictionaryEntries({"at\\x09", "usng\\x09", "address\\x09", "\\x09100\\x09", "\\x09IP-1", "\\x09LP-1", "15T", " WJ ", "513000,4890500",
         "1e308", "-0", "NaN", "Infinity", "0x1p3", ",", "Street", "Lane"})
     void location(byte[] data) {
         String[] f = new String(data, StandardCharsets.UTF_8).split("\t", 4);

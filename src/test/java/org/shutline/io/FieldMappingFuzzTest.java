@@ -24,7 +24,7 @@ class FieldMappingFuzzTest {
     @FuzzTest(maxDuration = "2m")
     @DictionaryEntries({"layers:", "tolerances:", "name: ", "fields: ", "values: ", "mains", "valves", "stations",
         "sense_taps", "services", "sources", "snap_m: ", "point_m: ", "service_m: ", "main_id", "status", "active",
-        ".inf", ".nan", "&a ", "*a", "{", "[", "\n  "})
+        ".inf", ".nan", "&a ", "*a", "{", "[", "\\x0A  "})
     void mapping(byte[] data) {
         Path file = FILE.with(data);
         Throwable t = Bounded.run(() -> {

@@ -22,8 +22,8 @@ import org.shutline.fuzz.Bounded;
  */
 class GpkgGeometryFuzzTest {
     @FuzzTest(maxDuration = "2m")
-    @DictionaryEntries({"GP", "\u0000\u0000\u0000\u0002", "\u0002\u0000\u0000\u0000", "\u0005\u0000\u0000\u0000",
-        "\u00e9\u0003\u0000\u0000", "\u00ff\u00ff\u00ff\u00ff"})
+    @DictionaryEntries({"GP", "\\x00\\x00\\x00\\x02", "\\x02\\x00\\x00\\x00", "\\x05\\x00\\x00\\x00",
+        "\\xE9\\x03\\x00\\x00", "\\xFF\\xFF\\xFF\\xFF", "\\x00\\x00\\x00\\x00\\x00\\x00\\xF8\\x7F"})
     void blob(byte[] data) {
         Bounded.run(() -> check(data));
     }

@@ -23,9 +23,9 @@ import org.shutline.model.CrsInfo;
 class PrjFuzzTest {
     @FuzzTest(maxDuration = "2m")
     @DictionaryEntries({"PROJCS[", "GEOGCS[", "DATUM[", "SPHEROID[", "PRIMEM[", "UNIT[", "PROJECTION[", "PARAMETER[",
-        "AUTHORITY[\"EPSG\",", "TOWGS84[", "Transverse_Mercator", "Lambert_Conformal_Conic", "_1SP", "_2SP",
+        "AUTHORITY[\\\"EPSG\\\",", "TOWGS84[", "Transverse_Mercator", "Lambert_Conformal_Conic", "_1SP", "_2SP",
         "standard_parallel_1", "standard_parallel_2", "latitude_of_origin", "central_meridian", "scale_factor",
-        "false_easting", "false_northing", "Foot_US", "0.3048006096012192", "NaN", "Infinity", "1e308", "\"", "]", ","})
+        "false_easting", "false_northing", "Foot_US", "0.3048006096012192", "NaN", "Infinity", "1e308", "\\\"", "]", ","})
     void prj(byte[] data) {
         String text = new String(data, StandardCharsets.ISO_8859_1);
         Throwable t = Bounded.run(() -> check(text), InputException.class);

@@ -22,7 +22,7 @@ class PlanReaderFuzzTest {
 
     @FuzzTest(maxDuration = "2m")
     @DictionaryEntries({"project: ", "network: ", "pressure_unit: ", "phases:", "- name: ", "start: ", "end: ", "steps:",
-        "close: ", "open: ", "note: ", "duration: ", "ordered: ", "&a ", "*a", "<<: ", "!!", "{", "[", "\n  ", "\n- "})
+        "close: ", "open: ", "note: ", "duration: ", "ordered: ", "&a ", "*a", "<<: ", "!!", "{", "[", "\\x0A  ", "\\x0A- "})
     void plan(byte[] data) {
         Path file = FILE.with(data);
         Throwable t = Bounded.run(() -> {
