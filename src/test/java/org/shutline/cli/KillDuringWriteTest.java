@@ -98,7 +98,8 @@ class KillDuringWriteTest {
             Thread.sleep(10);
         }
         long full = (System.nanoTime() - t0) / 1_000_000;
-        assertThat(first.exitValue()).as(Files.readString(tmp.resolve("first.log"))).isEqualTo(0);
+        // exit 1: written, with the sample's deliberate data errors reported (sample-gis/README.md)
+        assertThat(first.exitValue()).as(Files.readString(tmp.resolve("first.log"))).isIn(0, 1);
         assertThat(stale).as("stale temporary file of an ended process").doesNotExist();
         OutputPackage.Check whole = OutputPackage.check(out);
         assertThat(whole.status()).isEqualTo(OutputPackage.Status.WHOLE);
@@ -145,7 +146,7 @@ class KillDuringWriteTest {
 
         Process last = export(out, "Crew C", tmp.resolve("last.log"));
         assertThat(last.waitFor(120, TimeUnit.SECONDS)).isTrue();
-        assertThat(last.exitValue()).as(Files.readString(tmp.resolve("last.log"))).isEqualTo(0);
+        assertThat(last.exitValue()).as(Files.readString(tmp.resolve("last.log"))).isIn(0, 1);
         assertThat(OutputPackage.check(out).status()).isEqualTo(OutputPackage.Status.WHOLE);
         assertThat(ourTemps(out)).as("temporary files of ours after a full run").isEmpty();
         Map<String, String> end = manifestHashes(out);
