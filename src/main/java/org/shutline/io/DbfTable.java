@@ -93,6 +93,10 @@ final class DbfTable {
             }
         } catch (DBFException e) {
             throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": " + e.getMessage(), e);
+        } catch (java.nio.BufferUnderflowException | IndexOutOfBoundsException | NumberFormatException | ArithmeticException e) {
+            // javadbf decoding a field of a width its type does not allow (a binary double of fewer than 8 bytes)
+            throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": a field cannot be decoded ("
+                    + e.getClass().getSimpleName() + ")", e);
         }
         return new Result(names, rows, deleted);
     }
