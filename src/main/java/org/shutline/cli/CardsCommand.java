@@ -106,8 +106,11 @@ public final class CardsCommand implements Callable<Integer>, WriteGuard.Writes 
                         List.of("item", "detail"), wrap(rows(t.network(), ps, c, grid), 54), pf));
             }
             try {
+                org.shutline.io.OutputPackage pkg = OutputFolder.start(out, spec, err);
                 DocumentExport.pdf(sheets, pf, new DocumentExport.Info("Emergency cards: " + ps.plan().project(),
-                        "Shut-off per phase", "Shutline"), out.resolve("emergency-cards.pdf"));
+                        "Shut-off per phase", "Shutline"), pkg.file("emergency-cards.pdf"));
+                pkg.add(pkg.file("emergency-cards.pdf"));
+                pkg.commit();
             } catch (IOException e) {
                 return NetworkInput.badInput(err, "cards: cannot write " + out.resolve("emergency-cards.pdf") + ": " + e.getMessage());
             }

@@ -137,7 +137,7 @@ public final class ExportCommand implements Callable<Integer>, WriteGuard.Writes
             return NetworkInput.badInput(err, e.getMessage());
         }
         try {
-            List<Path> files = rb.write(out, Progress.NONE);
+            List<Path> files = rb.write(OutputFolder.start(out, spec, err), Progress.NONE);
             for (Path f : files) o.println("wrote " + f);
             o.println(Caution.TEXT);
             o.flush();

@@ -17,7 +17,7 @@ import picocli.CommandLine.Command;
     description = "Gas distribution outage zoning: network check, feed trace, valve isolation, work plans, maps.",
     subcommands = {CheckCommand.class, TraceCommand.class, IsolateCommand.class, PlanCommand.class, IncidentCommand.class,
         RiskCommand.class, CardsCommand.class, ExportCommand.class, GenerateCommand.class, BenchCommand.class, ReadBenchCommand.class,
-        PlanBenchCommand.class, OpenCommand.class, CommandLine.HelpCommand.class})
+        PlanBenchCommand.class, OpenCommand.class, VerifyCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     /** Exit code for a failure inside Shutline itself (a bug), distinct from 1 (errors found) and 2 (bad input). */
     public static final int INTERNAL_ERROR = 3;

@@ -15,6 +15,7 @@ import org.shutline.analysis.PlanEvaluation;
 import org.shutline.model.Finding;
 import org.shutline.report.FindingSection;
 import org.shutline.io.AtomicFiles;
+import org.shutline.io.OutputPackage;
 import org.shutline.io.InputException;
 import org.shutline.model.Caution;
 import org.shutline.model.Progress;
@@ -83,9 +84,13 @@ public final class PlanCommand implements Callable<Integer>, WriteGuard.Writes {
         o.flush();
         if (out != null) {
             try {
-                AtomicFiles.writeString(out.resolve("plan-steps.csv"), stepsCsv(r));
-                AtomicFiles.writeString(out.resolve("plan-hazards.csv"), hazardsCsv(r));
-                AtomicFiles.writeString(out.resolve("plan.json"), Json.write(json(r)));
+                OutputPackage pkg = OutputFolder.start(out, spec, err);
+                for (String[] f : new String[][] {{"plan-steps.csv", stepsCsv(r)}, {"plan-hazards.csv", hazardsCsv(r)},
+                        {"plan.json", Json.write(json(r))}}) {
+                    AtomicFiles.writeString(pkg.file(f[0]), f[1]);
+                    pkg.add(pkg.file(f[0]));
+                }
+                pkg.commit();
             } catch (IOException e) {
                 return NetworkInput.badInput(err, "plan: cannot write to " + out + ": " + e.getMessage());
             }

@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.shutline.analysis.RiskTables;
 import org.shutline.io.GeoPackageWriter;
 import org.shutline.io.InputException;
+import org.shutline.io.OutputPackage;
 import org.shutline.io.WriteLayer;
 import org.shutline.model.Caution;
 import org.shutline.model.Network;
@@ -80,11 +81,15 @@ public final class RiskCommand implements Callable<Integer>, WriteGuard.Writes {
         RiskTables tables = RiskTables.build(segs);
         long t2 = System.nanoTime();
         try {
-            Csv.write(out.resolve("segments.csv"), SEGMENT_HEADER, segmentRows(tables));
-            Csv.write(out.resolve("stations.csv"), STATION_HEADER, stationRows(tables));
-            Csv.write(out.resolve("valves-to-fix.csv"), VALVE_HEADER, valveRows(tables));
-            GeoPackageWriter.write(out.resolve("risk-segments.gpkg"), t.network().crs(), List.of(layer(tables)), Progress.NONE);
-            if (!noMap) RiskMap.write(t.network(), tables, 1600, 1240, out.resolve("risk-map.png"));
+            OutputPackage pkg = OutputFolder.start(out, spec, err);
+            Csv.write(pkg.file("segments.csv"), SEGMENT_HEADER, segmentRows(tables));
+            Csv.write(pkg.file("stations.csv"), STATION_HEADER, stationRows(tables));
+            Csv.write(pkg.file("valves-to-fix.csv"), VALVE_HEADER, valveRows(tables));
+            GeoPackageWriter.write(pkg.file("risk-segments.gpkg"), t.network().crs(), List.of(layer(tables)), Progress.NONE);
+            if (!noMap) RiskMap.write(t.network(), tables, 1600, 1240, pkg.file("risk-map.png"));
+            for (String f : new String[] {"segments.csv", "stations.csv", "valves-to-fix.csv", "risk-segments.gpkg"}) pkg.add(pkg.file(f));
+            if (!noMap) pkg.add(pkg.file("risk-map.png"));
+            pkg.commit();
         } catch (IOException e) {
             return NetworkInput.badInput(err, "risk: cannot write to " + out + ": " + e.getMessage());
         }

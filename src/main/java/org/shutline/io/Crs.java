@@ -92,6 +92,8 @@ public final class Crs {
             try {
                 CrsInfo c = fromEpsg(Integer.parseInt(auth.text(1).trim()));
                 return new CrsInfo(root.text(0) == null ? c.name() : root.text(0), c.epsg(), c.proj4(), c.unit());
+            } catch (InputException e) {
+                throw new InputException(where + ": " + e.getMessage(), e);
             } catch (NumberFormatException e) {
                 throw new InputException(where + ": bad EPSG code '" + auth.text(1) + "' in CRS definition");
             }

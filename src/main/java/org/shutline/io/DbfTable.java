@@ -51,9 +51,18 @@ final class DbfTable {
         } catch (IOException e) {
             throw new InputException(dbf + ": cannot read: " + e.getMessage(), e);
         }
+        checkHeader(bytes, dbf);
+        return read(bytes, dbf, charset(bytes, dbf, cpg));
+    }
+
+    /**
+     * Reads a {@code .dbf} already in memory ({@code dbf} names it in messages), text in
+     * {@code cs}, or when null in the charset of its language-driver byte (else ISO-8859-1).
+     */
+    static Result read(byte[] bytes, Path dbf, Charset charset) throws InputException {
         int count = checkHeader(bytes, dbf);
-        Charset cs = charset(bytes, dbf, cpg);
-        if (cs.equals(StandardCharsets.UTF_8)) checkUtf8(bytes, count, dbf, cpg);
+        Charset cs = charset != null ? charset : charset(bytes, dbf, null);
+        if (cs.equals(StandardCharsets.UTF_8)) checkUtf8(bytes, count, dbf, null);
         List<String> names = new ArrayList<>();
         List<Object[]> rows = new ArrayList<>(count);
         int rec = 0;
@@ -66,7 +75,17 @@ final class DbfTable {
             // with showDeletedRows javadbf puts a pseudo-field "deleted" first; the descriptors in the file decide
             int skip = r.getFieldCount() - descriptors(bytes);
             if (skip < 0 || skip > 1) throw new InputException(dbf + ": corrupt header (field descriptors)");
-            for (int i = skip; i < r.getFieldCount(); i++) names.add(r.getField(i).getName());
+            long widths = 1; // the deletion flag
+            for (int i = skip; i < r.getFieldCount(); i++) {
+                names.add(r.getField(i).getName());
+                // javadbf takes a character field's decimal-count byte as the high byte of its length
+                int len = r.getField(i).getLength();
+                if (len < 1) throw new InputException(dbf + ": corrupt header: field " + r.getField(i).getName() + " has length " + len);
+                widths += len;
+            }
+            if (widths != recLen) {
+                throw new InputException(dbf + ": corrupt header: field lengths add up to " + widths + " bytes, the record length is " + recLen);
+            }
             for (rec = 1; rec <= count; rec++) {
                 Object[] row = r.nextRecord();
                 if (row == null) throw new InputException(dbf + ": truncated: record " + rec + " of " + count + " missing");
@@ -75,6 +94,10 @@ final class DbfTable {
             }
         } catch (DBFException e) {
             throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": " + e.getMessage(), e);
+        } catch (java.nio.BufferUnderflowException | IndexOutOfBoundsException | NumberFormatException | ArithmeticException e) {
+            // javadbf decoding a field of a width its type does not allow (a binary double of fewer than 8 bytes)
+            throw new InputException(dbf + ": corrupt " + (rec == 0 ? "header" : "record " + rec) + ": a field cannot be decoded ("
+                    + e.getClass().getSimpleName() + ")", e);
         }
         return new Result(names, rows, deleted);
     }

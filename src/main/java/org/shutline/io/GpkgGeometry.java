@@ -16,7 +16,7 @@ import org.locationtech.jts.io.WKBReader;
  * <p>The common shapes of a network, 2D Point, LineString and MultiLineString, are read
  * straight from the bytes into one packed {@code double[]} per line or point (JTS
  * {@link PackedCoordinateSequence.Double}, no per-vertex objects). Anything else (Z or M
- * coordinates, polygons, collections, empty parts, NaN points, lines of fewer than two
+ * coordinates, polygons, collections, empty parts, points with a NaN ordinate, lines of fewer than two
  * points) is handed to JTS {@link WKBReader}, which read every blob before and decides
  * exactly as it did. The empty flag of the header, and an empty WKB geometry, give no
  * geometry. A blob that is not a GeoPackage geometry, has an unknown envelope code, an
@@ -72,7 +72,7 @@ final class GpkgGeometry {
             if (type == 1) {
                 double x = f64();
                 double y = f64();
-                if (Double.isNaN(x) && Double.isNaN(y)) return null;
+                if (Double.isNaN(x) || Double.isNaN(y)) return null; // JTS reads a point with a NaN ordinate as empty
                 return factory.createPoint(new PackedCoordinateSequence.Double(new double[] {x, y}, 2, 0));
             }
             if (type == 2) return line();

@@ -28,7 +28,7 @@ final class PrjTranslator {
 
     static Result translate(Wkt root) {
         if (root.keyword.equals("GEOGCS")) {
-            return new Result(root.text(0), "+proj=longlat " + ellipsoid(root) + " +no_defs", LinearUnit.METRE, true);
+            return new Result(root.text(0) == null ? "unnamed CRS" : root.text(0), "+proj=longlat " + ellipsoid(root) + " +no_defs", LinearUnit.METRE, true);
         }
         if (!root.keyword.equals("PROJCS")) {
             throw new IllegalArgumentException("unsupported CRS kind " + root.keyword + " (expected PROJCS or GEOGCS)");
@@ -39,7 +39,7 @@ final class PrjTranslator {
         if (unitNode == null) throw new IllegalArgumentException("PROJCS without a linear UNIT");
         LinearUnit unit = unit(unitNode.text(0), unitNode.number(1));
         Wkt proj = root.child("PROJECTION");
-        if (proj == null) throw new IllegalArgumentException("PROJCS without PROJECTION");
+        if (proj == null || proj.text(0) == null) throw new IllegalArgumentException("PROJCS without a named PROJECTION");
         String method = proj.text(0).toLowerCase(Locale.ROOT);
         double f = unit.metres();
         StringBuilder sb = new StringBuilder();
@@ -69,7 +69,7 @@ final class PrjTranslator {
         sb.append(" +x_0=").append(fmt(param(root, 0, "false_easting") * f))
                 .append(" +y_0=").append(fmt(param(root, 0, "false_northing") * f))
                 .append(' ').append(ellipsoid(geog)).append(' ').append(unitKeyword(unit)).append(" +no_defs");
-        return new Result(root.text(0), sb.toString(), unit, false);
+        return new Result(root.text(0) == null ? "unnamed CRS" : root.text(0), sb.toString(), unit, false);
     }
 
     /** The linear unit named by a WKT UNIT node, recognised by its size in metres. */

@@ -55,9 +55,18 @@ final class ShpReader {
     /** Reads {@code shp} with its index {@code shx} (null when there is none: an error after the .shp header is checked). */
     static Result read(Path shp, Path shx) throws InputException {
         ByteBuffer s = load(shp);
-        int type = header(s, shp);
+        header(s, shp);
         if (shx == null) throw new InputException(shp + ": no .shx index beside it");
-        ByteBuffer x = load(shx);
+        return read(s, shp, load(shx), shx);
+    }
+
+    /** Reads a {@code .shp} and its {@code .shx} already in memory; the paths name them in messages. */
+    static Result read(byte[] shp, Path shpName, byte[] shx, Path shxName) throws InputException {
+        return read(ByteBuffer.wrap(shp), shpName, ByteBuffer.wrap(shx), shxName);
+    }
+
+    private static Result read(ByteBuffer s, Path shp, ByteBuffer x, Path shx) throws InputException {
+        int type = header(s, shp);
         int xtype = header(x, shx);
         if (xtype != type) {
             throw new InputException(shx + ": shape type " + xtype + " differs from " + shp.getFileName() + " (" + type + ")");
@@ -157,6 +166,10 @@ final class ShpReader {
             int end = i + 1 < nParts ? le.getInt(at + 48 + 4 * i) : nPoints;
             if (start < 0 || start >= end || end > nPoints || (i == 0 && start != 0)) {
                 throw new InputException(p + ": record " + rec + ": corrupt part index " + i);
+            }
+            // "A part is a connected sequence of two or more points" (ESRI Shapefile Technical Description, 1998, PolyLine)
+            if (end - start < 2) {
+                throw new InputException(p + ": record " + rec + ": part " + i + " has one point (a line needs two or more)");
             }
             Coordinate[] cs = new Coordinate[end - start];
             for (int j = start; j < end; j++) {

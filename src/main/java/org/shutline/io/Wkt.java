@@ -84,7 +84,9 @@ final class Wkt {
         String s = text(i);
         if (s == null) throw new IllegalArgumentException(keyword + " lacks a number at argument " + i);
         try {
-            return Double.parseDouble(s);
+            double d = Double.parseDouble(s);
+            if (!Double.isFinite(d)) throw new IllegalArgumentException(keyword + ": '" + s + "' is not a finite number");
+            return d;
         } catch (NumberFormatException e) {
             throw new IllegalArgumentException(keyword + ": '" + s + "' is not a number", e);
         }

@@ -19,6 +19,7 @@ import org.locationtech.jts.geom.Envelope;
 import org.shutline.analysis.PlanEvaluation;
 import org.shutline.model.Finding;
 import org.shutline.io.GeoPackageWriter;
+import org.shutline.io.OutputPackage;
 import org.shutline.io.WriteLayer;
 import org.shutline.model.Network;
 import org.shutline.trace.NetworkState;
@@ -52,7 +53,8 @@ import org.shutline.render.UsngGrid;
  * {@code map.svg}, {@code results.gpkg}, one {@code <layer>.geojson} per result layer
  * ({@link ResultLayers}), {@code valves.csv}, {@code customers.csv}, and for a plan
  * {@code chart-steps.png/.svg} and {@code chart-phases.png/.svg}: only those of the
- * chosen formats. A target path that is the input network or plan file is refused
+ * chosen formats; then, last, the manifest {@code shutline-manifest.txt} that tells the
+ * package is whole ({@link OutputPackage}). A target path that is the input network or plan file is refused
  * ({@link IOException}) before anything is written.
  *
  * <p>A builder is immutable once made and keeps no Swing state: build it and call
@@ -392,6 +394,18 @@ public final class ReportBuilder {
      * @throws IOException when a file cannot be written or a target is an input file
      */
     public List<Path> write(Path dir, Progress progress) throws IOException {
+        for (Path t : targets(dir)) refuseInput(t);
+        return write(OutputPackage.start(dir, "export from the window"), progress);
+    }
+
+    /**
+     * Writes the chosen formats into the package's folder and its manifest last
+     * ({@link OutputPackage}); returns the files written, the manifest last.
+     *
+     * @throws IOException when a file cannot be written or a target is an input file
+     */
+    public List<Path> write(OutputPackage pkg, Progress progress) throws IOException {
+        Path dir = pkg.dir();
         Set<Format> fm = options.formats();
         List<Path> targets = targets(dir);
         for (Path t : targets) refuseInput(t);
@@ -439,6 +453,8 @@ public final class ReportBuilder {
             Csv.write(add(out, dir.resolve("valves.csv")), FieldLists.VALVE_HEADER, valveRows());
             Csv.write(add(out, dir.resolve("customers.csv")), FieldLists.CUSTOMER_HEADER, customerRows());
         }
+        for (Path p : out) pkg.add(p);
+        out.add(pkg.commit());
         return List.copyOf(out);
     }
 
@@ -451,7 +467,7 @@ public final class ReportBuilder {
     public static List<Path> targets(Path dir) {
         List<Path> t = new ArrayList<>();
         for (String n : List.of("report.pdf", "map.png", "map.svg", "results.gpkg", "valves.csv", "customers.csv",
-                "chart-steps.png", "chart-phases.png", "chart-steps.svg", "chart-phases.svg")) {
+                "chart-steps.png", "chart-phases.png", "chart-steps.svg", "chart-phases.svg", OutputPackage.MANIFEST)) {
             t.add(dir.resolve(n));
         }
         for (String n : List.of("gas_off", "valves_to_operate", "affected_services", "hazards", "station_sheds",
