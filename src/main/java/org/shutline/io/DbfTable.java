@@ -52,7 +52,7 @@ final class DbfTable {
             throw new InputException(dbf + ": cannot read: " + e.getMessage(), e);
         }
         checkHeader(bytes, dbf);
-        return read(bytes, dbf, charset(bytes, dbf, cpg));
+        return read(bytes, dbf, charset(bytes, dbf, cpg), cpg);
     }
 
     /**
@@ -60,9 +60,14 @@ final class DbfTable {
      * {@code cs}, or when null in the charset of its language-driver byte (else ISO-8859-1).
      */
     static Result read(byte[] bytes, Path dbf, Charset charset) throws InputException {
+        return read(bytes, dbf, charset, null);
+    }
+
+    /** The same, {@code cpg} (may be null) naming the code-page file in messages. */
+    static Result read(byte[] bytes, Path dbf, Charset charset, Path cpg) throws InputException {
         int count = checkHeader(bytes, dbf);
         Charset cs = charset != null ? charset : charset(bytes, dbf, null);
-        if (cs.equals(StandardCharsets.UTF_8)) checkUtf8(bytes, count, dbf, null);
+        if (cs.equals(StandardCharsets.UTF_8)) checkUtf8(bytes, count, dbf, cpg);
         List<String> names = new ArrayList<>();
         List<Object[]> rows = new ArrayList<>(count);
         int rec = 0;
